@@ -1,0 +1,3 @@
+using LogicProof.Cli;
+
+return CliApplication.Run(args, Console.Out, Console.Error);

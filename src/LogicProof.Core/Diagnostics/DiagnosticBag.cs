@@ -1,0 +1,45 @@
+using System.Collections;
+using LogicProof.Core.Text;
+
+namespace LogicProof.Core.Diagnostics;
+
+/// <summary>Collects diagnostics in the order found; every error of a file is kept, not only the first.</summary>
+public sealed class DiagnosticBag : IEnumerable<Diagnostic>
+{
+    private readonly List<Diagnostic> _items = [];
+
+    public bool HasErrors => _items.Exists(d => d.IsError);
+
+    public int Count => _items.Count;
+
+    public void Add(Diagnostic diagnostic) => _items.Add(diagnostic);
+
+    public void AddRange(IEnumerable<Diagnostic> diagnostics) => _items.AddRange(diagnostics);
+
+    public Diagnostic Error(string code, string message, SourceSpan span)
+    {
+        var d = new Diagnostic(code, Severity.Error, message, span);
+        _items.Add(d);
+        return d;
+    }
+
+    public Diagnostic Warning(string code, string message, SourceSpan span)
+    {
+        var d = new Diagnostic(code, Severity.Warning, message, span);
+        _items.Add(d);
+        return d;
+    }
+
+    public Diagnostic Info(string code, string message, SourceSpan span)
+    {
+        var d = new Diagnostic(code, Severity.Info, message, span);
+        _items.Add(d);
+        return d;
+    }
+
+    public IReadOnlyList<Diagnostic> ToList() => [.. _items];
+
+    public IEnumerator<Diagnostic> GetEnumerator() => _items.GetEnumerator();
+
+    IEnumerator IEnumerable.GetEnumerator() => GetEnumerator();
+}

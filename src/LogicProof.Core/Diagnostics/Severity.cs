@@ -1,0 +1,8 @@
+namespace LogicProof.Core.Diagnostics;
+
+public enum Severity
+{
+    Info,
+    Warning,
+    Error,
+}

@@ -1,0 +1,9 @@
+namespace LogicProof.Language.Binding;
+
+public enum SymbolKind
+{
+    Input,
+    Setting,
+    Local,
+    Output,
+}
