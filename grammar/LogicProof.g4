@@ -80,17 +80,18 @@ equation
     : target=IDENT ASSIGN expr SEMI
     ;
 
-// Lowest to highest precedence: ->, SINCE, OR, XOR, AND, comparison, + -, * /, unary NOT and -.
+// ANTLR gives the first alternative the tightest binding. From tightest to loosest: unary NOT and -, * /, + -,
+// comparison, AND, XOR, OR, SINCE, -> (right-associative). The others are left-associative.
 expr
-    : <assoc = right> left=expr IMPLIES right=expr                   # impliesExpr
-    | left=expr SINCE right=expr                                    # sinceExpr
-    | left=expr OR right=expr                                       # orExpr
-    | left=expr XOR right=expr                                      # xorExpr
-    | left=expr AND right=expr                                      # andExpr
-    | left=expr op=(EQ | NEQ | LT | LE | GT | GE) right=expr         # compareExpr
-    | left=expr op=(PLUS | MINUS) right=expr                        # additiveExpr
+    : op=(NOT | MINUS) operand=expr                                 # unaryExpr
     | left=expr op=(STAR | SLASH) right=expr                        # multiplicativeExpr
-    | op=(NOT | MINUS) operand=expr                                 # unaryExpr
+    | left=expr op=(PLUS | MINUS) right=expr                        # additiveExpr
+    | left=expr op=(EQ | NEQ | LT | LE | GT | GE) right=expr         # compareExpr
+    | left=expr AND right=expr                                      # andExpr
+    | left=expr XOR right=expr                                      # xorExpr
+    | left=expr OR right=expr                                       # orExpr
+    | left=expr SINCE right=expr                                    # sinceExpr
+    | <assoc = right> left=expr IMPLIES right=expr                   # impliesExpr
     | primary                                                       # primaryExpr
     ;
 

@@ -393,89 +393,19 @@ public partial class LogicProofBaseListener : ILogicProofListener {
 	/// <param name="context">The parse tree.</param>
 	public virtual void ExitPrimaryExpr([NotNull] LogicProofParser.PrimaryExprContext context) { }
 	/// <summary>
-	/// Enter a parse tree produced by the <c>impliesExpr</c>
+	/// Enter a parse tree produced by the <c>multiplicativeExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// <para>The default implementation does nothing.</para>
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
-	public virtual void EnterImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context) { }
+	public virtual void EnterMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context) { }
 	/// <summary>
-	/// Exit a parse tree produced by the <c>impliesExpr</c>
+	/// Exit a parse tree produced by the <c>multiplicativeExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// <para>The default implementation does nothing.</para>
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
-	public virtual void ExitImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context) { }
-	/// <summary>
-	/// Enter a parse tree produced by the <c>sinceExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void EnterSinceExpr([NotNull] LogicProofParser.SinceExprContext context) { }
-	/// <summary>
-	/// Exit a parse tree produced by the <c>sinceExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void ExitSinceExpr([NotNull] LogicProofParser.SinceExprContext context) { }
-	/// <summary>
-	/// Enter a parse tree produced by the <c>orExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void EnterOrExpr([NotNull] LogicProofParser.OrExprContext context) { }
-	/// <summary>
-	/// Exit a parse tree produced by the <c>orExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void ExitOrExpr([NotNull] LogicProofParser.OrExprContext context) { }
-	/// <summary>
-	/// Enter a parse tree produced by the <c>xorExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void EnterXorExpr([NotNull] LogicProofParser.XorExprContext context) { }
-	/// <summary>
-	/// Exit a parse tree produced by the <c>xorExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void ExitXorExpr([NotNull] LogicProofParser.XorExprContext context) { }
-	/// <summary>
-	/// Enter a parse tree produced by the <c>andExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void EnterAndExpr([NotNull] LogicProofParser.AndExprContext context) { }
-	/// <summary>
-	/// Exit a parse tree produced by the <c>andExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void ExitAndExpr([NotNull] LogicProofParser.AndExprContext context) { }
-	/// <summary>
-	/// Enter a parse tree produced by the <c>compareExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void EnterCompareExpr([NotNull] LogicProofParser.CompareExprContext context) { }
-	/// <summary>
-	/// Exit a parse tree produced by the <c>compareExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// <para>The default implementation does nothing.</para>
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	public virtual void ExitCompareExpr([NotNull] LogicProofParser.CompareExprContext context) { }
+	public virtual void ExitMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context) { }
 	/// <summary>
 	/// Enter a parse tree produced by the <c>additiveExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
@@ -491,19 +421,89 @@ public partial class LogicProofBaseListener : ILogicProofListener {
 	/// <param name="context">The parse tree.</param>
 	public virtual void ExitAdditiveExpr([NotNull] LogicProofParser.AdditiveExprContext context) { }
 	/// <summary>
-	/// Enter a parse tree produced by the <c>multiplicativeExpr</c>
+	/// Enter a parse tree produced by the <c>compareExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// <para>The default implementation does nothing.</para>
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
-	public virtual void EnterMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context) { }
+	public virtual void EnterCompareExpr([NotNull] LogicProofParser.CompareExprContext context) { }
 	/// <summary>
-	/// Exit a parse tree produced by the <c>multiplicativeExpr</c>
+	/// Exit a parse tree produced by the <c>compareExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// <para>The default implementation does nothing.</para>
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
-	public virtual void ExitMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context) { }
+	public virtual void ExitCompareExpr([NotNull] LogicProofParser.CompareExprContext context) { }
+	/// <summary>
+	/// Enter a parse tree produced by the <c>andExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void EnterAndExpr([NotNull] LogicProofParser.AndExprContext context) { }
+	/// <summary>
+	/// Exit a parse tree produced by the <c>andExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void ExitAndExpr([NotNull] LogicProofParser.AndExprContext context) { }
+	/// <summary>
+	/// Enter a parse tree produced by the <c>xorExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void EnterXorExpr([NotNull] LogicProofParser.XorExprContext context) { }
+	/// <summary>
+	/// Exit a parse tree produced by the <c>xorExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void ExitXorExpr([NotNull] LogicProofParser.XorExprContext context) { }
+	/// <summary>
+	/// Enter a parse tree produced by the <c>orExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void EnterOrExpr([NotNull] LogicProofParser.OrExprContext context) { }
+	/// <summary>
+	/// Exit a parse tree produced by the <c>orExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void ExitOrExpr([NotNull] LogicProofParser.OrExprContext context) { }
+	/// <summary>
+	/// Enter a parse tree produced by the <c>sinceExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void EnterSinceExpr([NotNull] LogicProofParser.SinceExprContext context) { }
+	/// <summary>
+	/// Exit a parse tree produced by the <c>sinceExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void ExitSinceExpr([NotNull] LogicProofParser.SinceExprContext context) { }
+	/// <summary>
+	/// Enter a parse tree produced by the <c>impliesExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void EnterImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context) { }
+	/// <summary>
+	/// Exit a parse tree produced by the <c>impliesExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// <para>The default implementation does nothing.</para>
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	public virtual void ExitImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context) { }
 	/// <summary>
 	/// Enter a parse tree produced by the <c>parenPrimary</c>
 	/// labeled alternative in <see cref="LogicProofParser.primary"/>.

@@ -334,77 +334,17 @@ public interface ILogicProofListener : IParseTreeListener {
 	/// <param name="context">The parse tree.</param>
 	void ExitPrimaryExpr([NotNull] LogicProofParser.PrimaryExprContext context);
 	/// <summary>
-	/// Enter a parse tree produced by the <c>impliesExpr</c>
+	/// Enter a parse tree produced by the <c>multiplicativeExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
-	void EnterImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context);
+	void EnterMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context);
 	/// <summary>
-	/// Exit a parse tree produced by the <c>impliesExpr</c>
+	/// Exit a parse tree produced by the <c>multiplicativeExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
-	void ExitImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context);
-	/// <summary>
-	/// Enter a parse tree produced by the <c>sinceExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void EnterSinceExpr([NotNull] LogicProofParser.SinceExprContext context);
-	/// <summary>
-	/// Exit a parse tree produced by the <c>sinceExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void ExitSinceExpr([NotNull] LogicProofParser.SinceExprContext context);
-	/// <summary>
-	/// Enter a parse tree produced by the <c>orExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void EnterOrExpr([NotNull] LogicProofParser.OrExprContext context);
-	/// <summary>
-	/// Exit a parse tree produced by the <c>orExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void ExitOrExpr([NotNull] LogicProofParser.OrExprContext context);
-	/// <summary>
-	/// Enter a parse tree produced by the <c>xorExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void EnterXorExpr([NotNull] LogicProofParser.XorExprContext context);
-	/// <summary>
-	/// Exit a parse tree produced by the <c>xorExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void ExitXorExpr([NotNull] LogicProofParser.XorExprContext context);
-	/// <summary>
-	/// Enter a parse tree produced by the <c>andExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void EnterAndExpr([NotNull] LogicProofParser.AndExprContext context);
-	/// <summary>
-	/// Exit a parse tree produced by the <c>andExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void ExitAndExpr([NotNull] LogicProofParser.AndExprContext context);
-	/// <summary>
-	/// Enter a parse tree produced by the <c>compareExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void EnterCompareExpr([NotNull] LogicProofParser.CompareExprContext context);
-	/// <summary>
-	/// Exit a parse tree produced by the <c>compareExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	void ExitCompareExpr([NotNull] LogicProofParser.CompareExprContext context);
+	void ExitMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context);
 	/// <summary>
 	/// Enter a parse tree produced by the <c>additiveExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
@@ -418,17 +358,77 @@ public interface ILogicProofListener : IParseTreeListener {
 	/// <param name="context">The parse tree.</param>
 	void ExitAdditiveExpr([NotNull] LogicProofParser.AdditiveExprContext context);
 	/// <summary>
-	/// Enter a parse tree produced by the <c>multiplicativeExpr</c>
+	/// Enter a parse tree produced by the <c>compareExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
-	void EnterMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context);
+	void EnterCompareExpr([NotNull] LogicProofParser.CompareExprContext context);
 	/// <summary>
-	/// Exit a parse tree produced by the <c>multiplicativeExpr</c>
+	/// Exit a parse tree produced by the <c>compareExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
-	void ExitMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context);
+	void ExitCompareExpr([NotNull] LogicProofParser.CompareExprContext context);
+	/// <summary>
+	/// Enter a parse tree produced by the <c>andExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void EnterAndExpr([NotNull] LogicProofParser.AndExprContext context);
+	/// <summary>
+	/// Exit a parse tree produced by the <c>andExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void ExitAndExpr([NotNull] LogicProofParser.AndExprContext context);
+	/// <summary>
+	/// Enter a parse tree produced by the <c>xorExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void EnterXorExpr([NotNull] LogicProofParser.XorExprContext context);
+	/// <summary>
+	/// Exit a parse tree produced by the <c>xorExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void ExitXorExpr([NotNull] LogicProofParser.XorExprContext context);
+	/// <summary>
+	/// Enter a parse tree produced by the <c>orExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void EnterOrExpr([NotNull] LogicProofParser.OrExprContext context);
+	/// <summary>
+	/// Exit a parse tree produced by the <c>orExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void ExitOrExpr([NotNull] LogicProofParser.OrExprContext context);
+	/// <summary>
+	/// Enter a parse tree produced by the <c>sinceExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void EnterSinceExpr([NotNull] LogicProofParser.SinceExprContext context);
+	/// <summary>
+	/// Exit a parse tree produced by the <c>sinceExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void ExitSinceExpr([NotNull] LogicProofParser.SinceExprContext context);
+	/// <summary>
+	/// Enter a parse tree produced by the <c>impliesExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void EnterImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context);
+	/// <summary>
+	/// Exit a parse tree produced by the <c>impliesExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	void ExitImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context);
 	/// <summary>
 	/// Enter a parse tree produced by the <c>parenPrimary</c>
 	/// labeled alternative in <see cref="LogicProofParser.primary"/>.

@@ -1610,143 +1610,63 @@ public partial class LogicProofParser : Parser {
 			else return visitor.VisitChildren(this);
 		}
 	}
-	public partial class ImpliesExprContext : ExprContext {
+	public partial class MultiplicativeExprContext : ExprContext {
 		public ExprContext left;
+		public IToken op;
 		public ExprContext right;
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode IMPLIES() { return GetToken(LogicProofParser.IMPLIES, 0); }
 		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
 			return GetRuleContexts<ExprContext>();
 		}
 		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
 			return GetRuleContext<ExprContext>(i);
 		}
-		public ImpliesExprContext(ExprContext context) { CopyFrom(context); }
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode STAR() { return GetToken(LogicProofParser.STAR, 0); }
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode SLASH() { return GetToken(LogicProofParser.SLASH, 0); }
+		public MultiplicativeExprContext(ExprContext context) { CopyFrom(context); }
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override void EnterRule(IParseTreeListener listener) {
 			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.EnterImpliesExpr(this);
+			if (typedListener != null) typedListener.EnterMultiplicativeExpr(this);
 		}
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override void ExitRule(IParseTreeListener listener) {
 			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.ExitImpliesExpr(this);
+			if (typedListener != null) typedListener.ExitMultiplicativeExpr(this);
 		}
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
 			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
-			if (typedVisitor != null) return typedVisitor.VisitImpliesExpr(this);
+			if (typedVisitor != null) return typedVisitor.VisitMultiplicativeExpr(this);
 			else return visitor.VisitChildren(this);
 		}
 	}
-	public partial class SinceExprContext : ExprContext {
+	public partial class AdditiveExprContext : ExprContext {
 		public ExprContext left;
+		public IToken op;
 		public ExprContext right;
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode SINCE() { return GetToken(LogicProofParser.SINCE, 0); }
 		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
 			return GetRuleContexts<ExprContext>();
 		}
 		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
 			return GetRuleContext<ExprContext>(i);
 		}
-		public SinceExprContext(ExprContext context) { CopyFrom(context); }
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode PLUS() { return GetToken(LogicProofParser.PLUS, 0); }
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode MINUS() { return GetToken(LogicProofParser.MINUS, 0); }
+		public AdditiveExprContext(ExprContext context) { CopyFrom(context); }
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override void EnterRule(IParseTreeListener listener) {
 			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.EnterSinceExpr(this);
+			if (typedListener != null) typedListener.EnterAdditiveExpr(this);
 		}
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override void ExitRule(IParseTreeListener listener) {
 			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.ExitSinceExpr(this);
+			if (typedListener != null) typedListener.ExitAdditiveExpr(this);
 		}
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
 			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
-			if (typedVisitor != null) return typedVisitor.VisitSinceExpr(this);
-			else return visitor.VisitChildren(this);
-		}
-	}
-	public partial class OrExprContext : ExprContext {
-		public ExprContext left;
-		public ExprContext right;
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode OR() { return GetToken(LogicProofParser.OR, 0); }
-		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
-			return GetRuleContexts<ExprContext>();
-		}
-		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
-			return GetRuleContext<ExprContext>(i);
-		}
-		public OrExprContext(ExprContext context) { CopyFrom(context); }
-		[System.Diagnostics.DebuggerNonUserCode]
-		public override void EnterRule(IParseTreeListener listener) {
-			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.EnterOrExpr(this);
-		}
-		[System.Diagnostics.DebuggerNonUserCode]
-		public override void ExitRule(IParseTreeListener listener) {
-			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.ExitOrExpr(this);
-		}
-		[System.Diagnostics.DebuggerNonUserCode]
-		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
-			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
-			if (typedVisitor != null) return typedVisitor.VisitOrExpr(this);
-			else return visitor.VisitChildren(this);
-		}
-	}
-	public partial class XorExprContext : ExprContext {
-		public ExprContext left;
-		public ExprContext right;
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode XOR() { return GetToken(LogicProofParser.XOR, 0); }
-		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
-			return GetRuleContexts<ExprContext>();
-		}
-		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
-			return GetRuleContext<ExprContext>(i);
-		}
-		public XorExprContext(ExprContext context) { CopyFrom(context); }
-		[System.Diagnostics.DebuggerNonUserCode]
-		public override void EnterRule(IParseTreeListener listener) {
-			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.EnterXorExpr(this);
-		}
-		[System.Diagnostics.DebuggerNonUserCode]
-		public override void ExitRule(IParseTreeListener listener) {
-			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.ExitXorExpr(this);
-		}
-		[System.Diagnostics.DebuggerNonUserCode]
-		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
-			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
-			if (typedVisitor != null) return typedVisitor.VisitXorExpr(this);
-			else return visitor.VisitChildren(this);
-		}
-	}
-	public partial class AndExprContext : ExprContext {
-		public ExprContext left;
-		public ExprContext right;
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode AND() { return GetToken(LogicProofParser.AND, 0); }
-		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
-			return GetRuleContexts<ExprContext>();
-		}
-		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
-			return GetRuleContext<ExprContext>(i);
-		}
-		public AndExprContext(ExprContext context) { CopyFrom(context); }
-		[System.Diagnostics.DebuggerNonUserCode]
-		public override void EnterRule(IParseTreeListener listener) {
-			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.EnterAndExpr(this);
-		}
-		[System.Diagnostics.DebuggerNonUserCode]
-		public override void ExitRule(IParseTreeListener listener) {
-			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.ExitAndExpr(this);
-		}
-		[System.Diagnostics.DebuggerNonUserCode]
-		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
-			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
-			if (typedVisitor != null) return typedVisitor.VisitAndExpr(this);
+			if (typedVisitor != null) return typedVisitor.VisitAdditiveExpr(this);
 			else return visitor.VisitChildren(this);
 		}
 	}
@@ -1784,63 +1704,143 @@ public partial class LogicProofParser : Parser {
 			else return visitor.VisitChildren(this);
 		}
 	}
-	public partial class AdditiveExprContext : ExprContext {
+	public partial class AndExprContext : ExprContext {
 		public ExprContext left;
-		public IToken op;
 		public ExprContext right;
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode AND() { return GetToken(LogicProofParser.AND, 0); }
 		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
 			return GetRuleContexts<ExprContext>();
 		}
 		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
 			return GetRuleContext<ExprContext>(i);
 		}
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode PLUS() { return GetToken(LogicProofParser.PLUS, 0); }
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode MINUS() { return GetToken(LogicProofParser.MINUS, 0); }
-		public AdditiveExprContext(ExprContext context) { CopyFrom(context); }
+		public AndExprContext(ExprContext context) { CopyFrom(context); }
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override void EnterRule(IParseTreeListener listener) {
 			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.EnterAdditiveExpr(this);
+			if (typedListener != null) typedListener.EnterAndExpr(this);
 		}
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override void ExitRule(IParseTreeListener listener) {
 			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.ExitAdditiveExpr(this);
+			if (typedListener != null) typedListener.ExitAndExpr(this);
 		}
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
 			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
-			if (typedVisitor != null) return typedVisitor.VisitAdditiveExpr(this);
+			if (typedVisitor != null) return typedVisitor.VisitAndExpr(this);
 			else return visitor.VisitChildren(this);
 		}
 	}
-	public partial class MultiplicativeExprContext : ExprContext {
+	public partial class XorExprContext : ExprContext {
 		public ExprContext left;
-		public IToken op;
 		public ExprContext right;
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode XOR() { return GetToken(LogicProofParser.XOR, 0); }
 		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
 			return GetRuleContexts<ExprContext>();
 		}
 		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
 			return GetRuleContext<ExprContext>(i);
 		}
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode STAR() { return GetToken(LogicProofParser.STAR, 0); }
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode SLASH() { return GetToken(LogicProofParser.SLASH, 0); }
-		public MultiplicativeExprContext(ExprContext context) { CopyFrom(context); }
+		public XorExprContext(ExprContext context) { CopyFrom(context); }
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override void EnterRule(IParseTreeListener listener) {
 			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.EnterMultiplicativeExpr(this);
+			if (typedListener != null) typedListener.EnterXorExpr(this);
 		}
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override void ExitRule(IParseTreeListener listener) {
 			ILogicProofListener typedListener = listener as ILogicProofListener;
-			if (typedListener != null) typedListener.ExitMultiplicativeExpr(this);
+			if (typedListener != null) typedListener.ExitXorExpr(this);
 		}
 		[System.Diagnostics.DebuggerNonUserCode]
 		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
 			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
-			if (typedVisitor != null) return typedVisitor.VisitMultiplicativeExpr(this);
+			if (typedVisitor != null) return typedVisitor.VisitXorExpr(this);
+			else return visitor.VisitChildren(this);
+		}
+	}
+	public partial class OrExprContext : ExprContext {
+		public ExprContext left;
+		public ExprContext right;
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode OR() { return GetToken(LogicProofParser.OR, 0); }
+		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
+			return GetRuleContexts<ExprContext>();
+		}
+		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
+			return GetRuleContext<ExprContext>(i);
+		}
+		public OrExprContext(ExprContext context) { CopyFrom(context); }
+		[System.Diagnostics.DebuggerNonUserCode]
+		public override void EnterRule(IParseTreeListener listener) {
+			ILogicProofListener typedListener = listener as ILogicProofListener;
+			if (typedListener != null) typedListener.EnterOrExpr(this);
+		}
+		[System.Diagnostics.DebuggerNonUserCode]
+		public override void ExitRule(IParseTreeListener listener) {
+			ILogicProofListener typedListener = listener as ILogicProofListener;
+			if (typedListener != null) typedListener.ExitOrExpr(this);
+		}
+		[System.Diagnostics.DebuggerNonUserCode]
+		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
+			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
+			if (typedVisitor != null) return typedVisitor.VisitOrExpr(this);
+			else return visitor.VisitChildren(this);
+		}
+	}
+	public partial class SinceExprContext : ExprContext {
+		public ExprContext left;
+		public ExprContext right;
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode SINCE() { return GetToken(LogicProofParser.SINCE, 0); }
+		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
+			return GetRuleContexts<ExprContext>();
+		}
+		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
+			return GetRuleContext<ExprContext>(i);
+		}
+		public SinceExprContext(ExprContext context) { CopyFrom(context); }
+		[System.Diagnostics.DebuggerNonUserCode]
+		public override void EnterRule(IParseTreeListener listener) {
+			ILogicProofListener typedListener = listener as ILogicProofListener;
+			if (typedListener != null) typedListener.EnterSinceExpr(this);
+		}
+		[System.Diagnostics.DebuggerNonUserCode]
+		public override void ExitRule(IParseTreeListener listener) {
+			ILogicProofListener typedListener = listener as ILogicProofListener;
+			if (typedListener != null) typedListener.ExitSinceExpr(this);
+		}
+		[System.Diagnostics.DebuggerNonUserCode]
+		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
+			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
+			if (typedVisitor != null) return typedVisitor.VisitSinceExpr(this);
+			else return visitor.VisitChildren(this);
+		}
+	}
+	public partial class ImpliesExprContext : ExprContext {
+		public ExprContext left;
+		public ExprContext right;
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode IMPLIES() { return GetToken(LogicProofParser.IMPLIES, 0); }
+		[System.Diagnostics.DebuggerNonUserCode] public ExprContext[] expr() {
+			return GetRuleContexts<ExprContext>();
+		}
+		[System.Diagnostics.DebuggerNonUserCode] public ExprContext expr(int i) {
+			return GetRuleContext<ExprContext>(i);
+		}
+		public ImpliesExprContext(ExprContext context) { CopyFrom(context); }
+		[System.Diagnostics.DebuggerNonUserCode]
+		public override void EnterRule(IParseTreeListener listener) {
+			ILogicProofListener typedListener = listener as ILogicProofListener;
+			if (typedListener != null) typedListener.EnterImpliesExpr(this);
+		}
+		[System.Diagnostics.DebuggerNonUserCode]
+		public override void ExitRule(IParseTreeListener listener) {
+			ILogicProofListener typedListener = listener as ILogicProofListener;
+			if (typedListener != null) typedListener.ExitImpliesExpr(this);
+		}
+		[System.Diagnostics.DebuggerNonUserCode]
+		public override TResult Accept<TResult>(IParseTreeVisitor<TResult> visitor) {
+			ILogicProofVisitor<TResult> typedVisitor = visitor as ILogicProofVisitor<TResult>;
+			if (typedVisitor != null) return typedVisitor.VisitImpliesExpr(this);
 			else return visitor.VisitChildren(this);
 		}
 	}
@@ -1883,7 +1883,7 @@ public partial class LogicProofParser : Parser {
 				    Consume();
 				}
 				State = 200;
-				((UnaryExprContext)_localctx).operand = expr(2);
+				((UnaryExprContext)_localctx).operand = expr(10);
 				}
 				break;
 			case TRUE:
@@ -1918,119 +1918,12 @@ public partial class LogicProofParser : Parser {
 					switch ( Interpreter.AdaptivePredict(TokenStream,20,Context) ) {
 					case 1:
 						{
-						_localctx = new ImpliesExprContext(new ExprContext(_parentctx, _parentState));
-						((ImpliesExprContext)_localctx).left = _prevctx;
-						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 204;
-						if (!(Precpred(Context, 10))) throw new FailedPredicateException(this, "Precpred(Context, 10)");
-						State = 205;
-						Match(IMPLIES);
-						State = 206;
-						((ImpliesExprContext)_localctx).right = expr(10);
-						}
-						break;
-					case 2:
-						{
-						_localctx = new SinceExprContext(new ExprContext(_parentctx, _parentState));
-						((SinceExprContext)_localctx).left = _prevctx;
-						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 207;
-						if (!(Precpred(Context, 9))) throw new FailedPredicateException(this, "Precpred(Context, 9)");
-						State = 208;
-						Match(SINCE);
-						State = 209;
-						((SinceExprContext)_localctx).right = expr(10);
-						}
-						break;
-					case 3:
-						{
-						_localctx = new OrExprContext(new ExprContext(_parentctx, _parentState));
-						((OrExprContext)_localctx).left = _prevctx;
-						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 210;
-						if (!(Precpred(Context, 8))) throw new FailedPredicateException(this, "Precpred(Context, 8)");
-						State = 211;
-						Match(OR);
-						State = 212;
-						((OrExprContext)_localctx).right = expr(9);
-						}
-						break;
-					case 4:
-						{
-						_localctx = new XorExprContext(new ExprContext(_parentctx, _parentState));
-						((XorExprContext)_localctx).left = _prevctx;
-						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 213;
-						if (!(Precpred(Context, 7))) throw new FailedPredicateException(this, "Precpred(Context, 7)");
-						State = 214;
-						Match(XOR);
-						State = 215;
-						((XorExprContext)_localctx).right = expr(8);
-						}
-						break;
-					case 5:
-						{
-						_localctx = new AndExprContext(new ExprContext(_parentctx, _parentState));
-						((AndExprContext)_localctx).left = _prevctx;
-						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 216;
-						if (!(Precpred(Context, 6))) throw new FailedPredicateException(this, "Precpred(Context, 6)");
-						State = 217;
-						Match(AND);
-						State = 218;
-						((AndExprContext)_localctx).right = expr(7);
-						}
-						break;
-					case 6:
-						{
-						_localctx = new CompareExprContext(new ExprContext(_parentctx, _parentState));
-						((CompareExprContext)_localctx).left = _prevctx;
-						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 219;
-						if (!(Precpred(Context, 5))) throw new FailedPredicateException(this, "Precpred(Context, 5)");
-						State = 220;
-						((CompareExprContext)_localctx).op = TokenStream.LT(1);
-						_la = TokenStream.LA(1);
-						if ( !((((_la) & ~0x3f) == 0 && ((1L << _la) & 67645734912L) != 0)) ) {
-							((CompareExprContext)_localctx).op = ErrorHandler.RecoverInline(this);
-						}
-						else {
-							ErrorHandler.ReportMatch(this);
-						    Consume();
-						}
-						State = 221;
-						((CompareExprContext)_localctx).right = expr(6);
-						}
-						break;
-					case 7:
-						{
-						_localctx = new AdditiveExprContext(new ExprContext(_parentctx, _parentState));
-						((AdditiveExprContext)_localctx).left = _prevctx;
-						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 222;
-						if (!(Precpred(Context, 4))) throw new FailedPredicateException(this, "Precpred(Context, 4)");
-						State = 223;
-						((AdditiveExprContext)_localctx).op = TokenStream.LT(1);
-						_la = TokenStream.LA(1);
-						if ( !(_la==PLUS || _la==MINUS) ) {
-							((AdditiveExprContext)_localctx).op = ErrorHandler.RecoverInline(this);
-						}
-						else {
-							ErrorHandler.ReportMatch(this);
-						    Consume();
-						}
-						State = 224;
-						((AdditiveExprContext)_localctx).right = expr(5);
-						}
-						break;
-					case 8:
-						{
 						_localctx = new MultiplicativeExprContext(new ExprContext(_parentctx, _parentState));
 						((MultiplicativeExprContext)_localctx).left = _prevctx;
 						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 225;
-						if (!(Precpred(Context, 3))) throw new FailedPredicateException(this, "Precpred(Context, 3)");
-						State = 226;
+						State = 204;
+						if (!(Precpred(Context, 9))) throw new FailedPredicateException(this, "Precpred(Context, 9)");
+						State = 205;
 						((MultiplicativeExprContext)_localctx).op = TokenStream.LT(1);
 						_la = TokenStream.LA(1);
 						if ( !(_la==STAR || _la==SLASH) ) {
@@ -2040,8 +1933,115 @@ public partial class LogicProofParser : Parser {
 							ErrorHandler.ReportMatch(this);
 						    Consume();
 						}
+						State = 206;
+						((MultiplicativeExprContext)_localctx).right = expr(10);
+						}
+						break;
+					case 2:
+						{
+						_localctx = new AdditiveExprContext(new ExprContext(_parentctx, _parentState));
+						((AdditiveExprContext)_localctx).left = _prevctx;
+						PushNewRecursionContext(_localctx, _startState, RULE_expr);
+						State = 207;
+						if (!(Precpred(Context, 8))) throw new FailedPredicateException(this, "Precpred(Context, 8)");
+						State = 208;
+						((AdditiveExprContext)_localctx).op = TokenStream.LT(1);
+						_la = TokenStream.LA(1);
+						if ( !(_la==PLUS || _la==MINUS) ) {
+							((AdditiveExprContext)_localctx).op = ErrorHandler.RecoverInline(this);
+						}
+						else {
+							ErrorHandler.ReportMatch(this);
+						    Consume();
+						}
+						State = 209;
+						((AdditiveExprContext)_localctx).right = expr(9);
+						}
+						break;
+					case 3:
+						{
+						_localctx = new CompareExprContext(new ExprContext(_parentctx, _parentState));
+						((CompareExprContext)_localctx).left = _prevctx;
+						PushNewRecursionContext(_localctx, _startState, RULE_expr);
+						State = 210;
+						if (!(Precpred(Context, 7))) throw new FailedPredicateException(this, "Precpred(Context, 7)");
+						State = 211;
+						((CompareExprContext)_localctx).op = TokenStream.LT(1);
+						_la = TokenStream.LA(1);
+						if ( !((((_la) & ~0x3f) == 0 && ((1L << _la) & 67645734912L) != 0)) ) {
+							((CompareExprContext)_localctx).op = ErrorHandler.RecoverInline(this);
+						}
+						else {
+							ErrorHandler.ReportMatch(this);
+						    Consume();
+						}
+						State = 212;
+						((CompareExprContext)_localctx).right = expr(8);
+						}
+						break;
+					case 4:
+						{
+						_localctx = new AndExprContext(new ExprContext(_parentctx, _parentState));
+						((AndExprContext)_localctx).left = _prevctx;
+						PushNewRecursionContext(_localctx, _startState, RULE_expr);
+						State = 213;
+						if (!(Precpred(Context, 6))) throw new FailedPredicateException(this, "Precpred(Context, 6)");
+						State = 214;
+						Match(AND);
+						State = 215;
+						((AndExprContext)_localctx).right = expr(7);
+						}
+						break;
+					case 5:
+						{
+						_localctx = new XorExprContext(new ExprContext(_parentctx, _parentState));
+						((XorExprContext)_localctx).left = _prevctx;
+						PushNewRecursionContext(_localctx, _startState, RULE_expr);
+						State = 216;
+						if (!(Precpred(Context, 5))) throw new FailedPredicateException(this, "Precpred(Context, 5)");
+						State = 217;
+						Match(XOR);
+						State = 218;
+						((XorExprContext)_localctx).right = expr(6);
+						}
+						break;
+					case 6:
+						{
+						_localctx = new OrExprContext(new ExprContext(_parentctx, _parentState));
+						((OrExprContext)_localctx).left = _prevctx;
+						PushNewRecursionContext(_localctx, _startState, RULE_expr);
+						State = 219;
+						if (!(Precpred(Context, 4))) throw new FailedPredicateException(this, "Precpred(Context, 4)");
+						State = 220;
+						Match(OR);
+						State = 221;
+						((OrExprContext)_localctx).right = expr(5);
+						}
+						break;
+					case 7:
+						{
+						_localctx = new SinceExprContext(new ExprContext(_parentctx, _parentState));
+						((SinceExprContext)_localctx).left = _prevctx;
+						PushNewRecursionContext(_localctx, _startState, RULE_expr);
+						State = 222;
+						if (!(Precpred(Context, 3))) throw new FailedPredicateException(this, "Precpred(Context, 3)");
+						State = 223;
+						Match(SINCE);
+						State = 224;
+						((SinceExprContext)_localctx).right = expr(4);
+						}
+						break;
+					case 8:
+						{
+						_localctx = new ImpliesExprContext(new ExprContext(_parentctx, _parentState));
+						((ImpliesExprContext)_localctx).left = _prevctx;
+						PushNewRecursionContext(_localctx, _startState, RULE_expr);
+						State = 225;
+						if (!(Precpred(Context, 2))) throw new FailedPredicateException(this, "Precpred(Context, 2)");
+						State = 226;
+						Match(IMPLIES);
 						State = 227;
-						((MultiplicativeExprContext)_localctx).right = expr(4);
+						((ImpliesExprContext)_localctx).right = expr(2);
 						}
 						break;
 					}
@@ -2901,14 +2901,14 @@ public partial class LogicProofParser : Parser {
 	}
 	private bool expr_sempred(ExprContext _localctx, int predIndex) {
 		switch (predIndex) {
-		case 0: return Precpred(Context, 10);
-		case 1: return Precpred(Context, 9);
-		case 2: return Precpred(Context, 8);
-		case 3: return Precpred(Context, 7);
-		case 4: return Precpred(Context, 6);
-		case 5: return Precpred(Context, 5);
-		case 6: return Precpred(Context, 4);
-		case 7: return Precpred(Context, 3);
+		case 0: return Precpred(Context, 9);
+		case 1: return Precpred(Context, 8);
+		case 2: return Precpred(Context, 7);
+		case 3: return Precpred(Context, 6);
+		case 4: return Precpred(Context, 5);
+		case 5: return Precpred(Context, 4);
+		case 6: return Precpred(Context, 3);
+		case 7: return Precpred(Context, 2);
 		}
 		return true;
 	}
@@ -2936,7 +2936,7 @@ public partial class LogicProofParser : Parser {
 		8,16,10,16,12,16,272,9,16,1,16,1,16,1,17,1,17,1,17,1,17,3,17,280,8,17,
 		1,18,1,18,1,18,1,18,1,18,1,19,1,19,1,19,1,19,1,19,1,19,1,19,1,19,3,19,
 		295,8,19,1,19,0,1,26,20,0,2,4,6,8,10,12,14,16,18,20,22,24,26,28,30,32,
-		34,36,38,0,5,1,0,14,16,2,0,21,21,37,37,1,0,30,35,1,0,36,37,1,0,38,39,330,
+		34,36,38,0,5,1,0,14,16,2,0,21,21,37,37,1,0,38,39,1,0,36,37,1,0,30,35,330,
 		0,40,1,0,0,0,2,49,1,0,0,0,4,133,1,0,0,0,6,135,1,0,0,0,8,137,1,0,0,0,10,
 		148,1,0,0,0,12,153,1,0,0,0,14,163,1,0,0,0,16,175,1,0,0,0,18,181,1,0,0,
 		0,20,184,1,0,0,0,22,191,1,0,0,0,24,193,1,0,0,0,26,202,1,0,0,0,28,255,1,
@@ -2982,37 +2982,37 @@ public partial class LogicProofParser : Parser {
 		5,45,0,0,187,21,1,0,0,0,188,192,5,26,0,0,189,190,5,45,0,0,190,192,5,46,
 		0,0,191,188,1,0,0,0,191,189,1,0,0,0,192,23,1,0,0,0,193,194,5,46,0,0,194,
 		195,5,27,0,0,195,196,3,26,13,0,196,197,5,44,0,0,197,25,1,0,0,0,198,199,
-		6,13,-1,0,199,200,7,1,0,0,200,203,3,26,13,2,201,203,3,28,14,0,202,198,
-		1,0,0,0,202,201,1,0,0,0,203,230,1,0,0,0,204,205,10,10,0,0,205,206,5,28,
-		0,0,206,229,3,26,13,10,207,208,10,9,0,0,208,209,5,25,0,0,209,229,3,26,
-		13,10,210,211,10,8,0,0,211,212,5,23,0,0,212,229,3,26,13,9,213,214,10,7,
-		0,0,214,215,5,24,0,0,215,229,3,26,13,8,216,217,10,6,0,0,217,218,5,22,0,
-		0,218,229,3,26,13,7,219,220,10,5,0,0,220,221,7,2,0,0,221,229,3,26,13,6,
-		222,223,10,4,0,0,223,224,7,3,0,0,224,229,3,26,13,5,225,226,10,3,0,0,226,
-		227,7,4,0,0,227,229,3,26,13,4,228,204,1,0,0,0,228,207,1,0,0,0,228,210,
-		1,0,0,0,228,213,1,0,0,0,228,216,1,0,0,0,228,219,1,0,0,0,228,222,1,0,0,
-		0,228,225,1,0,0,0,229,232,1,0,0,0,230,228,1,0,0,0,230,231,1,0,0,0,231,
-		27,1,0,0,0,232,230,1,0,0,0,233,234,5,40,0,0,234,235,3,26,13,0,235,236,
-		5,41,0,0,236,256,1,0,0,0,237,256,5,19,0,0,238,256,5,20,0,0,239,256,3,22,
-		11,0,240,256,5,45,0,0,241,242,5,46,0,0,242,251,5,40,0,0,243,248,3,30,15,
-		0,244,245,5,42,0,0,245,247,3,30,15,0,246,244,1,0,0,0,247,250,1,0,0,0,248,
-		246,1,0,0,0,248,249,1,0,0,0,249,252,1,0,0,0,250,248,1,0,0,0,251,243,1,
-		0,0,0,251,252,1,0,0,0,252,253,1,0,0,0,253,256,5,41,0,0,254,256,5,46,0,
-		0,255,233,1,0,0,0,255,237,1,0,0,0,255,238,1,0,0,0,255,239,1,0,0,0,255,
-		240,1,0,0,0,255,241,1,0,0,0,255,254,1,0,0,0,256,29,1,0,0,0,257,258,5,46,
-		0,0,258,260,5,27,0,0,259,257,1,0,0,0,259,260,1,0,0,0,260,261,1,0,0,0,261,
-		262,3,26,13,0,262,31,1,0,0,0,263,264,5,46,0,0,264,265,5,35,0,0,265,270,
-		3,34,17,0,266,267,5,42,0,0,267,269,3,34,17,0,268,266,1,0,0,0,269,272,1,
-		0,0,0,270,268,1,0,0,0,270,271,1,0,0,0,271,273,1,0,0,0,272,270,1,0,0,0,
-		273,274,5,44,0,0,274,33,1,0,0,0,275,280,5,46,0,0,276,280,3,22,11,0,277,
-		280,5,19,0,0,278,280,5,20,0,0,279,275,1,0,0,0,279,276,1,0,0,0,279,277,
-		1,0,0,0,279,278,1,0,0,0,280,35,1,0,0,0,281,282,5,46,0,0,282,283,5,35,0,
-		0,283,284,3,38,19,0,284,285,5,44,0,0,285,37,1,0,0,0,286,287,3,22,11,0,
-		287,288,5,29,0,0,288,289,3,22,11,0,289,295,1,0,0,0,290,295,3,22,11,0,291,
-		295,5,19,0,0,292,295,5,20,0,0,293,295,5,46,0,0,294,286,1,0,0,0,294,290,
-		1,0,0,0,294,291,1,0,0,0,294,292,1,0,0,0,294,293,1,0,0,0,295,39,1,0,0,0,
-		29,44,52,67,75,83,91,99,107,115,128,133,141,144,159,168,171,181,184,191,
-		202,228,230,248,251,255,259,270,279,294
+		6,13,-1,0,199,200,7,1,0,0,200,203,3,26,13,10,201,203,3,28,14,0,202,198,
+		1,0,0,0,202,201,1,0,0,0,203,230,1,0,0,0,204,205,10,9,0,0,205,206,7,2,0,
+		0,206,229,3,26,13,10,207,208,10,8,0,0,208,209,7,3,0,0,209,229,3,26,13,
+		9,210,211,10,7,0,0,211,212,7,4,0,0,212,229,3,26,13,8,213,214,10,6,0,0,
+		214,215,5,22,0,0,215,229,3,26,13,7,216,217,10,5,0,0,217,218,5,24,0,0,218,
+		229,3,26,13,6,219,220,10,4,0,0,220,221,5,23,0,0,221,229,3,26,13,5,222,
+		223,10,3,0,0,223,224,5,25,0,0,224,229,3,26,13,4,225,226,10,2,0,0,226,227,
+		5,28,0,0,227,229,3,26,13,2,228,204,1,0,0,0,228,207,1,0,0,0,228,210,1,0,
+		0,0,228,213,1,0,0,0,228,216,1,0,0,0,228,219,1,0,0,0,228,222,1,0,0,0,228,
+		225,1,0,0,0,229,232,1,0,0,0,230,228,1,0,0,0,230,231,1,0,0,0,231,27,1,0,
+		0,0,232,230,1,0,0,0,233,234,5,40,0,0,234,235,3,26,13,0,235,236,5,41,0,
+		0,236,256,1,0,0,0,237,256,5,19,0,0,238,256,5,20,0,0,239,256,3,22,11,0,
+		240,256,5,45,0,0,241,242,5,46,0,0,242,251,5,40,0,0,243,248,3,30,15,0,244,
+		245,5,42,0,0,245,247,3,30,15,0,246,244,1,0,0,0,247,250,1,0,0,0,248,246,
+		1,0,0,0,248,249,1,0,0,0,249,252,1,0,0,0,250,248,1,0,0,0,251,243,1,0,0,
+		0,251,252,1,0,0,0,252,253,1,0,0,0,253,256,5,41,0,0,254,256,5,46,0,0,255,
+		233,1,0,0,0,255,237,1,0,0,0,255,238,1,0,0,0,255,239,1,0,0,0,255,240,1,
+		0,0,0,255,241,1,0,0,0,255,254,1,0,0,0,256,29,1,0,0,0,257,258,5,46,0,0,
+		258,260,5,27,0,0,259,257,1,0,0,0,259,260,1,0,0,0,260,261,1,0,0,0,261,262,
+		3,26,13,0,262,31,1,0,0,0,263,264,5,46,0,0,264,265,5,35,0,0,265,270,3,34,
+		17,0,266,267,5,42,0,0,267,269,3,34,17,0,268,266,1,0,0,0,269,272,1,0,0,
+		0,270,268,1,0,0,0,270,271,1,0,0,0,271,273,1,0,0,0,272,270,1,0,0,0,273,
+		274,5,44,0,0,274,33,1,0,0,0,275,280,5,46,0,0,276,280,3,22,11,0,277,280,
+		5,19,0,0,278,280,5,20,0,0,279,275,1,0,0,0,279,276,1,0,0,0,279,277,1,0,
+		0,0,279,278,1,0,0,0,280,35,1,0,0,0,281,282,5,46,0,0,282,283,5,35,0,0,283,
+		284,3,38,19,0,284,285,5,44,0,0,285,37,1,0,0,0,286,287,3,22,11,0,287,288,
+		5,29,0,0,288,289,3,22,11,0,289,295,1,0,0,0,290,295,3,22,11,0,291,295,5,
+		19,0,0,292,295,5,20,0,0,293,295,5,46,0,0,294,286,1,0,0,0,294,290,1,0,0,
+		0,294,291,1,0,0,0,294,292,1,0,0,0,294,293,1,0,0,0,295,39,1,0,0,0,29,44,
+		52,67,75,83,91,99,107,115,128,133,141,144,159,168,171,181,184,191,202,
+		228,230,248,251,255,259,270,279,294
 	};
 
 	public static readonly ATN _ATN =

@@ -210,47 +210,12 @@ public interface ILogicProofVisitor<Result> : IParseTreeVisitor<Result> {
 	/// <return>The visitor result.</return>
 	Result VisitPrimaryExpr([NotNull] LogicProofParser.PrimaryExprContext context);
 	/// <summary>
-	/// Visit a parse tree produced by the <c>impliesExpr</c>
+	/// Visit a parse tree produced by the <c>multiplicativeExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
 	/// <return>The visitor result.</return>
-	Result VisitImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context);
-	/// <summary>
-	/// Visit a parse tree produced by the <c>sinceExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	/// <return>The visitor result.</return>
-	Result VisitSinceExpr([NotNull] LogicProofParser.SinceExprContext context);
-	/// <summary>
-	/// Visit a parse tree produced by the <c>orExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	/// <return>The visitor result.</return>
-	Result VisitOrExpr([NotNull] LogicProofParser.OrExprContext context);
-	/// <summary>
-	/// Visit a parse tree produced by the <c>xorExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	/// <return>The visitor result.</return>
-	Result VisitXorExpr([NotNull] LogicProofParser.XorExprContext context);
-	/// <summary>
-	/// Visit a parse tree produced by the <c>andExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	/// <return>The visitor result.</return>
-	Result VisitAndExpr([NotNull] LogicProofParser.AndExprContext context);
-	/// <summary>
-	/// Visit a parse tree produced by the <c>compareExpr</c>
-	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
-	/// </summary>
-	/// <param name="context">The parse tree.</param>
-	/// <return>The visitor result.</return>
-	Result VisitCompareExpr([NotNull] LogicProofParser.CompareExprContext context);
+	Result VisitMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context);
 	/// <summary>
 	/// Visit a parse tree produced by the <c>additiveExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
@@ -259,12 +224,47 @@ public interface ILogicProofVisitor<Result> : IParseTreeVisitor<Result> {
 	/// <return>The visitor result.</return>
 	Result VisitAdditiveExpr([NotNull] LogicProofParser.AdditiveExprContext context);
 	/// <summary>
-	/// Visit a parse tree produced by the <c>multiplicativeExpr</c>
+	/// Visit a parse tree produced by the <c>compareExpr</c>
 	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
 	/// </summary>
 	/// <param name="context">The parse tree.</param>
 	/// <return>The visitor result.</return>
-	Result VisitMultiplicativeExpr([NotNull] LogicProofParser.MultiplicativeExprContext context);
+	Result VisitCompareExpr([NotNull] LogicProofParser.CompareExprContext context);
+	/// <summary>
+	/// Visit a parse tree produced by the <c>andExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	/// <return>The visitor result.</return>
+	Result VisitAndExpr([NotNull] LogicProofParser.AndExprContext context);
+	/// <summary>
+	/// Visit a parse tree produced by the <c>xorExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	/// <return>The visitor result.</return>
+	Result VisitXorExpr([NotNull] LogicProofParser.XorExprContext context);
+	/// <summary>
+	/// Visit a parse tree produced by the <c>orExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	/// <return>The visitor result.</return>
+	Result VisitOrExpr([NotNull] LogicProofParser.OrExprContext context);
+	/// <summary>
+	/// Visit a parse tree produced by the <c>sinceExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	/// <return>The visitor result.</return>
+	Result VisitSinceExpr([NotNull] LogicProofParser.SinceExprContext context);
+	/// <summary>
+	/// Visit a parse tree produced by the <c>impliesExpr</c>
+	/// labeled alternative in <see cref="LogicProofParser.expr"/>.
+	/// </summary>
+	/// <param name="context">The parse tree.</param>
+	/// <return>The visitor result.</return>
+	Result VisitImpliesExpr([NotNull] LogicProofParser.ImpliesExprContext context);
 	/// <summary>
 	/// Visit a parse tree produced by the <c>parenPrimary</c>
 	/// labeled alternative in <see cref="LogicProofParser.primary"/>.

@@ -34,4 +34,10 @@ public sealed record ScanModel(
 
     /// <summary>Timers whose preset was not a whole number of scans, with the exact and rounded-up values.</summary>
     public IReadOnlyList<PresetRounding> Roundings { get; init; } = [];
+
+    /// <summary>
+    /// For a model that is a cone-of-influence slice of another: the index in the original model of each cell of
+    /// this one (index by cell), so traces can be shown with the original cells. Null for a model built from source.
+    /// </summary>
+    public IReadOnlyList<int>? OriginalCells { get; init; }
 }

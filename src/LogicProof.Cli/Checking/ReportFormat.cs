@@ -1,0 +1,10 @@
+namespace LogicProof.Cli.Checking;
+
+public enum ReportFormat
+{
+    Text,
+    Json,
+    Sarif,
+    Junit,
+    Html,
+}

@@ -1,0 +1,25 @@
+using LogicProof.Language.Binding;
+
+namespace LogicProof.Model.Plant;
+
+/// <summary>
+/// What the breaker model did to a scheme. <see cref="Scheme"/> is the scheme to build the model from: the one given
+/// when there is no breaker_model block, the scheme with the breaker added when there is one, null after an error.
+/// <see cref="StatusModelled"/> says whether 52a/52b are driven by the model (TRUE) or free inputs (FALSE): reports
+/// print it, since without the model "no pumping" and "sealed in" are checked against a breaker that may do anything.
+/// </summary>
+public sealed record BreakerModelExpansion(BoundScheme? Scheme, bool StatusModelled, BreakerModelSettings? Settings, BreakerProgram? Program)
+{
+    public IReadOnlyList<string> ModelledStatuses => Program?.DrivenStatuses ?? [];
+
+    /// <summary>One line for a report.</summary>
+    public string Summary =>
+        StatusModelled && Settings is { } s
+            ? $"breaker status {string.Join(", ", ModelledStatuses)} driven by the breaker model (closing {Describe(s.ClosingTime)}, "
+              + $"opening {Describe(s.OpeningTime)}, trip-free {(s.TripFree ? "yes" : "no")}, close into fault "
+              + (s.CloseIntoFaultDelay is { } d ? $"within {Describe(d)}" : "no") + ")"
+            : "breaker status inputs are free (no breaker_model block): the checker lets 52a/52b take any value at any scan";
+
+    private static string Describe(BreakerTimeRange range) =>
+        range.LowText == range.HighText ? range.LowText : $"{range.LowText} .. {range.HighText}";
+}

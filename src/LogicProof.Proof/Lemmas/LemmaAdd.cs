@@ -1,0 +1,3 @@
+namespace LogicProof.Proof.Lemmas;
+
+public sealed record LemmaAdd(LemmaExpression Left, LemmaExpression Right) : LemmaExpression;

@@ -1,0 +1,3 @@
+namespace LogicProof.Proof.Lemmas;
+
+public sealed record LemmaBool(bool Value) : LemmaExpression;

@@ -1,0 +1,3 @@
+namespace LogicProof.Proof.Lemmas;
+
+public sealed record LemmaImplies(LemmaExpression Left, LemmaExpression Right) : LemmaExpression;

@@ -1,0 +1,3 @@
+namespace LogicProof.Proof.Lemmas;
+
+public sealed record LemmaNot(LemmaExpression Operand) : LemmaExpression;

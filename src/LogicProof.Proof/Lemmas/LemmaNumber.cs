@@ -1,0 +1,5 @@
+using Fractions;
+
+namespace LogicProof.Proof.Lemmas;
+
+public sealed record LemmaNumber(Fraction Value) : LemmaExpression;

@@ -1,0 +1,31 @@
+using System.Runtime.CompilerServices;
+using LogicProof.Language;
+using LogicProof.Model.Rules;
+
+namespace LogicProof.Model.Tests.Rules;
+
+public sealed class ExampleRolesTests
+{
+    [Fact]
+    public void Prepare_WhenRunOnEveryExampleScheme_BindsItsRolesAndBreakerModelWithoutError()
+    {
+        var examples = Directory.GetFiles(Path.Combine(RepositoryRoot(), "examples"), "*.lpl", SearchOption.AllDirectories);
+        Assert.NotEmpty(examples);
+        foreach (var path in examples)
+        {
+            var front = FrontEnd.Load(path);
+            if (front.Scheme is null)
+            {
+                continue; // a file that does not bind shows the front end's own errors; not this test's subject
+            }
+
+            var setup = RuleSetup.Prepare(front.Scheme);
+
+            Assert.True(!setup.HasErrors, $"{path}:{Environment.NewLine}{RuleHarness.Describe(setup.Diagnostics)}");
+            Assert.NotEmpty(setup.Rules.Applied);
+        }
+    }
+
+    private static string RepositoryRoot([CallerFilePath] string thisFile = "") =>
+        Path.GetFullPath(Path.Combine(Path.GetDirectoryName(thisFile)!, "..", "..", ".."));
+}

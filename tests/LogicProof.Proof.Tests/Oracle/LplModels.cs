@@ -1,0 +1,39 @@
+using LogicProof.Core.Diagnostics;
+using LogicProof.Language;
+using LogicProof.Model.Lowering;
+using LogicProof.Model.Scan;
+
+namespace LogicProof.Proof.Tests.Oracle;
+
+/// <summary>Source text to scan model through the product's own front end and lowering, with every diagnostic.</summary>
+internal static class LplModels
+{
+    public static (ScanModel? Model, IReadOnlyList<Diagnostic> Diagnostics) TryLoad(string source, string path)
+    {
+        var front = FrontEnd.LoadText(path, source);
+        if (front.Scheme is null)
+        {
+            return (null, front.Diagnostics);
+        }
+
+        var built = ModelBuilder.Build(front.Scheme);
+        return (built.Model, [.. front.Diagnostics, .. built.Diagnostics]);
+    }
+
+    /// <summary>The model of a scheme that must be free of errors; an error fails the test with the diagnostics.</summary>
+    public static ScanModel Load(string source, string path = "test.lpl")
+    {
+        var (model, diagnostics) = TryLoad(source, path);
+        return model ?? throw new InvalidOperationException(
+            "the scheme has errors:" + Environment.NewLine
+            + string.Join(Environment.NewLine, diagnostics.Select(d => DiagnosticFormatter.Format(d, null)))
+            + Environment.NewLine + source);
+    }
+
+    public static ModelProperty Property(ScanModel model, string name) =>
+        model.Properties.Single(p => string.Equals(p.Name, name, StringComparison.OrdinalIgnoreCase));
+
+    public static int CounterSlotOf(ScanModel model, string cellName) =>
+        model.StateSlots.Single(s => s.Kind == StateSlotKind.TimerCounter
+            && string.Equals(model.Cells[s.Cell].Name, cellName, StringComparison.OrdinalIgnoreCase)).Index;
+}
