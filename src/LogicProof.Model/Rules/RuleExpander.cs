@@ -103,7 +103,7 @@ public static class RuleExpander
             var input = roles.Get(role).Signals.FirstOrDefault(s => s.Kind == SymbolKind.Input);
             if (input is not null)
             {
-                return (null, [], $"{role} '{input.Name}' is an input: the lockout latch is outside this logic, so its reset cannot be checked here");
+                return (null, [], $"{role} '{input.Name}' is an input: the rule checks a latch the scheme computes, and this one is outside the logic");
             }
         }
 

@@ -44,7 +44,8 @@ public sealed class CheckCommandTests : IDisposable
         Assert.Contains("bay.lpl:8:21: warning LP3013", error, StringComparison.Ordinal);
         Assert.Contains("bay.lpl:9:3: 'PERMIT' is written here", error, StringComparison.Ordinal);
         Assert.Contains("note LP3014", error, StringComparison.Ordinal);
-        Assert.Equal("checked 1 file: 0 errors, 2 warnings, 1 note" + Environment.NewLine, output);
+        Assert.Contains("summary: 1 file; 0 proved, 0 violated, 0 inconclusive", output, StringComparison.Ordinal);
+        Assert.Contains("0 errors, 2 warnings, 1 note; exit code 0", output, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -54,7 +55,7 @@ public sealed class CheckCommandTests : IDisposable
 
         Assert.Equal(0, exitCode);
         Assert.Equal(string.Empty, error);
-        Assert.Equal("checked 1 file: 0 errors, 0 warnings, 0 notes" + Environment.NewLine, output);
+        Assert.Contains("0 errors, 0 warnings, 0 notes; exit code 0", output, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -68,7 +69,8 @@ public sealed class CheckCommandTests : IDisposable
         Assert.Contains("broken.lpl:7:", error, StringComparison.Ordinal);
         Assert.Contains("error LP1", error, StringComparison.Ordinal);
         Assert.Contains("warning LP3010", error, StringComparison.Ordinal);
-        Assert.StartsWith("checked 3 files: 1 error", output, StringComparison.Ordinal);
+        Assert.Contains("summary: 3 files;", output, StringComparison.Ordinal);
+        Assert.Contains("1 error", output, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -83,12 +85,70 @@ public sealed class CheckCommandTests : IDisposable
     }
 
     [Fact]
-    public void Check_WhenProofsAreAsked_SaysTheyAreNotAvailableAndExitsTwo()
+    public void Check_WhenRequirementHolds_ProvesItAndExitsZero()
     {
-        var (exitCode, output, _) = Run(["check", Write("clean.lpl", Clean)]);
+        var scheme = Write("holds.lpl", Clean + "\nrequire NO_CLOSE_INTO_CLOSED: CLOSED -> NOT CLOSE;\n");
 
-        Assert.Equal(2, exitCode);
-        Assert.Contains("proofs are not available in this build", output, StringComparison.Ordinal);
+        var (exitCode, output, error) = Run(["check", scheme]);
+
+        Assert.True(exitCode == 0, output + error);
+        Assert.Contains("PROVED", output, StringComparison.Ordinal);
+        Assert.Contains("A proof covers the logic as modelled", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Check_WhenRequirementFails_ShowsTheTraceWritesTheCsvAndExitsOne()
+    {
+        var scheme = Write("fails.lpl", Clean + "\nrequire NEVER_CLOSES: NOT CLOSE;\n");
+        var trace = Path.Combine(_directory, "trace.csv");
+
+        var (exitCode, output, error) = Run(["check", scheme, "--trace-out", trace]);
+
+        Assert.True(exitCode == 1, output + error);
+        Assert.Contains("VIOLATED", output, StringComparison.Ordinal);
+        Assert.StartsWith("time_ms,", File.ReadAllLines(trace).First(line => !line.StartsWith('#')), StringComparison.Ordinal);
+
+        // The exported trace, replayed by the simulate command, closes the output at the failing scan.
+        var (simulateExit, simulated, _) = Run(["simulate", scheme, "--inputs", trace, "--format", "csv"]);
+        Assert.Equal(0, simulateExit);
+        Assert.EndsWith(",1", simulated.TrimEnd().Split('\n')[^1].TrimEnd(), StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("json", "\"safetyStatement\"")]
+    [InlineData("sarif", "\"2.1.0\"")]
+    [InlineData("junit", "<testsuites")]
+    public void Check_WhenMachineFormatAsked_WritesThatFormat(string format, string marker)
+    {
+        var scheme = Write("fails.lpl", Clean + "\nrequire NEVER_CLOSES: NOT CLOSE;\n");
+
+        var (exitCode, output, _) = Run(["check", scheme, "--format", format]);
+
+        Assert.Equal(1, exitCode);
+        Assert.Contains(marker, output, StringComparison.OrdinalIgnoreCase);
+    }
+
+    [Fact]
+    public void Check_WhenOnlyBoundedSearchRunsOnAHoldingRequirement_IsInconclusiveNeverProvedAndExitsTwo()
+    {
+        // Bounded model checking alone can refute but never prove: reaching its depth bound without a violation
+        // must be reported as inconclusive (exit 2), not as a pass.
+        var scheme = Write("deep.lpl", """
+            scheme DEEP;
+            frequency 60 Hz;
+            scan 2 ms;
+            inputs CMD : bool; end
+            outputs LATE : bool; end
+            logic
+              LATE := TON(IN := CMD, PT := T#10s);
+            end
+            require LATE_ONLY_WITH_CMD: LATE -> CMD;
+            """);
+
+        var (exitCode, output, error) = Run(["check", scheme, "--time-limit", "1", "--depth", "3", "--engine", "bmc"]);
+
+        Assert.True(exitCode == 2, output + error);
+        Assert.Contains("INCONCLUSIVE", output, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -108,7 +168,7 @@ public sealed class CheckCommandTests : IDisposable
         var (exitCode, output, error) = Run(["check", .. examples, "--static-only"]);
 
         Assert.True(exitCode == 0, error);
-        Assert.Contains(" 0 errors", output, StringComparison.Ordinal);
+        Assert.Contains("; 0 errors", output, StringComparison.Ordinal);
     }
 
     private string Write(string name, string text)

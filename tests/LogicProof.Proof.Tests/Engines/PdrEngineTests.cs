@@ -171,7 +171,7 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
             new ProofProblem(model, LplModels.Property(model, "NOT_FULL")), Options with { TimeLimit = null }, cancellation.Token);
 
         output.WriteLine($"stopped after {clock.Elapsed.TotalSeconds:0.000} s");
-        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(10), $"took {clock.Elapsed}");
+        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(30), $"took {clock.Elapsed}");
         Assert.Equal("cancelled", Assert.IsType<Inconclusive>(verdict).Reason);
     }
 

@@ -117,7 +117,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
         output.WriteLine($"{model.StateSlots.Count} slots, {lemmas.Count} lemmas in {clock.Elapsed.TotalSeconds:0.00} s");
         Assert.True(model.StateSlots.Count >= 200, $"only {model.StateSlots.Count} slots");
         Assert.NotEmpty(lemmas);
-        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(15), $"took {clock.Elapsed}");
+        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(60), $"took {clock.Elapsed}");
     }
 
     [Fact]

@@ -89,7 +89,7 @@ internal static class InvariantSchemes
     public static string ManyBays(int bays)
     {
         var text = new StringBuilder();
-        text.AppendLine("// Brackenford 400 kV switching station, 40 bays (fictional)");
+        text.AppendLine("// Quillmere 400 kV switching station, 40 bays (fictional)");
         text.AppendLine("scheme BRACKENFORD_BAYS;");
         text.AppendLine("frequency 50 Hz;");
         text.AppendLine("scan 2 ms;");

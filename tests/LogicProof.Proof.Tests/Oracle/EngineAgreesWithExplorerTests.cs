@@ -16,7 +16,8 @@ namespace LogicProof.Proof.Tests.Oracle;
 /// </summary>
 public sealed class EngineAgreesWithExplorerTests(ITestOutputHelper output)
 {
-    private const int Iterations = 2000;
+    /// <summary>At least 2,000 schemes per run; LOGICPROOF_ORACLE_SCHEMES raises it for a longer soak (never lowers it).</summary>
+    private static readonly int Iterations = Math.Max(2000, int.TryParse(Environment.GetEnvironmentVariable("LOGICPROOF_ORACLE_SCHEMES"), out var n) ? n : 0);
     private const int Threads = 2;
     private const int MaxExploredStates = 50_000;
 

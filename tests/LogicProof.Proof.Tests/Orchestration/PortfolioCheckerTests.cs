@@ -64,7 +64,7 @@ public sealed class PortfolioCheckerTests
         var inconclusive = Assert.IsType<Inconclusive>(result.Verdict);
         Assert.Contains("time limit", inconclusive.Reason, StringComparison.Ordinal);
         Assert.True(inconclusive.DepthReached > 0);
-        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(10), $"took {clock.Elapsed}");
+        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(30), $"took {clock.Elapsed}");
     }
 
     [Fact]
@@ -77,7 +77,7 @@ public sealed class PortfolioCheckerTests
         var result = await new PortfolioChecker().CheckPropertyAsync(model, SchemeLoader.Property(model, "SLOW_AFTER_FAST"), options);
 
         Assert.Contains("time limit", Assert.IsType<Inconclusive>(result.Verdict).Reason, StringComparison.Ordinal);
-        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(10), $"took {clock.Elapsed}");
+        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(30), $"took {clock.Elapsed}");
     }
 
     [Fact]

@@ -49,7 +49,7 @@ public sealed class SpacerTests
         }
 
         Assert.True(canceled || status == Status.UNKNOWN, $"status {status}");
-        Assert.True(watch.Elapsed < TimeSpan.FromSeconds(5), $"took {watch.Elapsed}");
+        Assert.True(watch.Elapsed < TimeSpan.FromSeconds(30), $"took {watch.Elapsed}");
         var (again, reachAgain, y) = Counter(ctx, bound: 10);
         Assert.Equal(
             Status.SATISFIABLE,

@@ -8,7 +8,7 @@ internal static class Schemes
 
     /// <summary><see cref="EveryBlock"/> with the TP, TON and TOF presets given.</summary>
     public static string EveryBlockWithPresets(string pulse, string onDelay, string offDelay) => $$"""
-        // Brackenford 33 kV switchboard, feeder BF-4 (fictional)
+        // Quillmere 33 kV switchboard, feeder BF-4 (fictional)
         scheme BF4_ALL;
         frequency 50 Hz;
         scan 2 ms;
