@@ -1,12 +1,19 @@
 using System.Globalization;
 using LogicProof.Bench;
 
-// Usage: front-end [--equations N] [--seed N]   |   simulate [--equations N] [--seconds N] [--seed N]
+// Usage: front-end [--equations N] [--seed N]   |   simulate [--equations N] [--seconds N] [--seed N]   |   bays [N ...]
 // Run in Release: dotnet run -c Release --project bench/LogicProof.Bench -- simulate
 const int DefaultSeed = 61131;
+if (args.Length > 0 && args[0] == "bays")
+{
+    // bays [N ...]: decide every requirement of N generated breaker bays (default 1, 10 and 40).
+    var counts = args.Skip(1).Select(a => int.Parse(a, CultureInfo.InvariantCulture)).DefaultIfEmpty().ToList();
+    return BayBenchmark.Run(counts.Count == 1 && counts[0] == 0 ? [1, 10, 40] : counts, Console.Out);
+}
+
 if (args.Length == 0 || args[0] is not ("front-end" or "simulate"))
 {
-    Console.Error.WriteLine("usage: front-end [--equations N] [--seed N] | simulate [--equations N] [--seconds N] [--seed N]");
+    Console.Error.WriteLine("usage: front-end [--equations N] [--seed N] | simulate [--equations N] [--seconds N] [--seed N] | bays [N ...]");
     return 2;
 }
 
