@@ -34,12 +34,17 @@ public sealed class PdrEngine : IProofEngine
     private static PropertyVerdict Check(ProofProblem problem, EngineOptions options, CancellationToken cancellationToken)
     {
         var clock = Stopwatch.StartNew();
+        if (cancellationToken.IsCancellationRequested)
+        {
+            return new Inconclusive("cancelled", 0);
+        }
+
         SpacerAnswer answer;
-        using (var session = new SolverSession(options.TimeLimit, cancellationToken))
+        using (var session = new SpacerSession(cancellationToken))
         {
             var encoder = new ScanEncoder(session.Context, problem.Model, CounterEncoding.Integer);
             var system = new HornSystem(encoder, problem.Property, problem.Lemmas, options.Accelerate);
-            answer = SpacerQuery.Run(system, Remaining(options, clock));
+            answer = SpacerQuery.Run(system, session, Remaining(options, clock));
         }
 
         if (cancellationToken.IsCancellationRequested)

@@ -1,17 +1,16 @@
 using System.Globalization;
-using LogicProof.Model.Scan;
 using Microsoft.Z3;
 
 namespace LogicProof.Proof.Pdr;
 
 /// <summary>
 /// Runs one <see cref="HornSystem"/> through Z3's Fixedpoint with the Spacer engine and reads the answer. A time
-/// limit is Spacer's own "timeout"; a cancelled run is interrupted through the context (by the session), which Z3
+/// limit is Spacer's own "timeout"; a cancelled query is interrupted by the <see cref="SpacerSession"/>, which Z3
 /// reports as a "canceled" error: both become <see cref="SpacerOutcome.Unknown"/>, never a verdict.
 /// </summary>
 internal static class SpacerQuery
 {
-    public static SpacerAnswer Run(HornSystem system, TimeSpan? remaining)
+    public static SpacerAnswer Run(HornSystem system, SpacerSession session, TimeSpan? remaining)
     {
         var context = system.Encoder.Context;
         using var fixedpoint = context.MkFixedpoint();
@@ -33,7 +32,7 @@ internal static class SpacerQuery
         Status status;
         try
         {
-            status = fixedpoint.Query(system.Query);
+            status = session.Run(() => fixedpoint.Query(system.Query));
         }
         catch (Z3Exception e)
         {
@@ -59,7 +58,7 @@ internal static class SpacerQuery
 
             // The cover's free variables are the arguments of Inv; de Bruijn index i is argument i.
             var names = model.StateSlots
-                .Select(s => context.MkConst(SlotName(s), system.Encoder.SlotSort(s.Index)))
+                .Select(s => context.MkConst(s.Name, system.Encoder.SlotSort(s.Index)))
                 .ToArray();
             return InvariantText.Write(cover.SubstituteVars(names).Simplify());
         }
@@ -68,6 +67,4 @@ internal static class SpacerQuery
             return string.Create(CultureInfo.InvariantCulture, $"(the invariant could not be read: {e.Message})");
         }
     }
-
-    private static string SlotName(StateSlot slot) => slot.Name;
 }
