@@ -17,7 +17,7 @@ public static class FrontEnd
     {
         var diagnostics = new DiagnosticBag();
         var source = SourceReader.Read(path, diagnostics);
-        return diagnostics.HasErrors ? new FrontEndResult(source, null, null, diagnostics.ToList()) : Analyze(source, diagnostics);
+        return Analyze(source, diagnostics);
     }
 
     public static FrontEndResult LoadText(string path, string text)
@@ -25,11 +25,17 @@ public static class FrontEnd
         var diagnostics = new DiagnosticBag();
         var source = new SourceText(path, text);
         SourceReader.CheckText(source, diagnostics);
-        return diagnostics.HasErrors ? new FrontEndResult(source, null, null, diagnostics.ToList()) : Analyze(source, diagnostics);
+        return Analyze(source, diagnostics);
     }
 
+    /// <summary>Parses and binds text that was read without error; otherwise gives only the diagnostics.</summary>
     private static FrontEndResult Analyze(SourceText source, DiagnosticBag diagnostics)
     {
+        if (diagnostics.HasErrors)
+        {
+            return new FrontEndResult(source, null, null, diagnostics.ToList());
+        }
+
         try
         {
             return LargeStack.Run(() =>

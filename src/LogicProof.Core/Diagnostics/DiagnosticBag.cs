@@ -16,30 +16,28 @@ public sealed class DiagnosticBag : IEnumerable<Diagnostic>
 
     public void AddRange(IEnumerable<Diagnostic> diagnostics) => _items.AddRange(diagnostics);
 
-    public Diagnostic Error(string code, string message, SourceSpan span)
-    {
-        var d = new Diagnostic(code, Severity.Error, message, span);
-        _items.Add(d);
-        return d;
-    }
+    public Diagnostic Error(string code, string message, SourceSpan span) =>
+        Record(new Diagnostic(code, Severity.Error, message, span));
 
-    public Diagnostic Warning(string code, string message, SourceSpan span)
-    {
-        var d = new Diagnostic(code, Severity.Warning, message, span);
-        _items.Add(d);
-        return d;
-    }
+    /// <summary>An error that also names one other place involved, such as the first declaration of a duplicate.</summary>
+    public Diagnostic Error(string code, string message, SourceSpan span, RelatedLocation related) =>
+        Record(new Diagnostic(code, Severity.Error, message, span) { Related = [related] });
 
-    public Diagnostic Info(string code, string message, SourceSpan span)
-    {
-        var d = new Diagnostic(code, Severity.Info, message, span);
-        _items.Add(d);
-        return d;
-    }
+    public Diagnostic Warning(string code, string message, SourceSpan span) =>
+        Record(new Diagnostic(code, Severity.Warning, message, span));
+
+    public Diagnostic Info(string code, string message, SourceSpan span) =>
+        Record(new Diagnostic(code, Severity.Info, message, span));
 
     public IReadOnlyList<Diagnostic> ToList() => [.. _items];
 
     public IEnumerator<Diagnostic> GetEnumerator() => _items.GetEnumerator();
 
     IEnumerator IEnumerable.GetEnumerator() => GetEnumerator();
+
+    private Diagnostic Record(Diagnostic diagnostic)
+    {
+        _items.Add(diagnostic);
+        return diagnostic;
+    }
 }

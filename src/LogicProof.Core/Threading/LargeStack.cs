@@ -12,7 +12,7 @@ namespace LogicProof.Core.Threading;
 /// </summary>
 public static class LargeStack
 {
-    public const int StackBytes = 512 * 1024 * 1024;
+    private const int StackBytes = 512 * 1024 * 1024;
 
     [ThreadStatic]
     private static bool _onLargeStack;

@@ -39,14 +39,11 @@ internal sealed class DeclarationBinder(DiagnosticBag diagnostics)
 
         if (_symbols.TryGetValue(symbol.Name, out var first))
         {
-            diagnostics.Add(new Diagnostic(
+            diagnostics.Error(
                 LanguageCodes.DuplicateName,
-                Severity.Error,
                 $"'{symbol.Name}' is already declared (names are compared without regard to letter case)",
-                symbol.DeclarationSpan)
-            {
-                Related = [new RelatedLocation($"the first declaration of '{first.Name}'", first.DeclarationSpan)],
-            });
+                symbol.DeclarationSpan,
+                new RelatedLocation($"the first declaration of '{first.Name}'", first.DeclarationSpan));
             return;
         }
 

@@ -129,7 +129,6 @@ internal sealed partial class ExpressionBinder(IReadOnlyDictionary<string, Symbo
     private BoundExpression? Combine(BinarySyntax binary, BoundExpression? left, bool inFormula)
     {
         var op = binary.Operator;
-        var symbol = OperatorText(op);
         if (!inFormula && op is BinaryOperator.Implies or BinaryOperator.Since)
         {
             diagnostics.Error(
@@ -143,23 +142,24 @@ internal sealed partial class ExpressionBinder(IReadOnlyDictionary<string, Symbo
         }
 
         var right = Bind(binary.Right, inFormula);
-        switch (op)
+        if (op is BinaryOperator.Equal or BinaryOperator.NotEqual)
         {
-            case BinaryOperator.Implies or BinaryOperator.Since or BinaryOperator.Or or BinaryOperator.Xor or BinaryOperator.And:
-                left = Expect(left, ValueType.Bool, "the left operand of", symbol);
-                right = Expect(right, ValueType.Bool, "the right operand of", symbol);
-                return left is null || right is null ? null : new BoundBinary(op, left, right, ValueType.Bool, binary.Span);
-            case BinaryOperator.Equal or BinaryOperator.NotEqual:
-                return BindEquality(binary, left, right);
-            case BinaryOperator.Less or BinaryOperator.LessOrEqual or BinaryOperator.Greater or BinaryOperator.GreaterOrEqual:
-                left = Expect(left, ValueType.Real, "the left operand of", symbol);
-                right = Expect(right, ValueType.Real, "the right operand of", symbol);
-                return left is null || right is null ? null : new BoundBinary(op, left, right, ValueType.Bool, binary.Span);
-            default:
-                left = Expect(left, ValueType.Real, "the left operand of", symbol);
-                right = Expect(right, ValueType.Real, "the right operand of", symbol);
-                return left is null || right is null ? null : BindArithmetic(binary, left, right);
+            return BindEquality(binary, left, right);
         }
+
+        var isLogical = op is BinaryOperator.Implies or BinaryOperator.Since or BinaryOperator.Or or BinaryOperator.Xor or BinaryOperator.And;
+        var operandType = isLogical ? ValueType.Bool : ValueType.Real;
+        var symbol = OperatorSpelling.Of(op);
+        left = Expect(left, operandType, "the left operand of", symbol);
+        right = Expect(right, operandType, "the right operand of", symbol);
+        if (left is null || right is null)
+        {
+            return null;
+        }
+
+        return op is BinaryOperator.Add or BinaryOperator.Subtract or BinaryOperator.Multiply or BinaryOperator.Divide
+            ? BindArithmetic(binary, left, right)
+            : new BoundBinary(op, left, right, ValueType.Bool, binary.Span);
     }
 
     private BoundExpression? BindEquality(BinarySyntax binary, BoundExpression? left, BoundExpression? right)
@@ -173,7 +173,7 @@ internal sealed partial class ExpressionBinder(IReadOnlyDictionary<string, Symbo
         {
             diagnostics.Error(
                 LanguageCodes.TypeMismatch,
-                $"{OperatorText(binary.Operator)} compares two bools or two reals, but this compares {TypeText.Of(left.Type)} with {TypeText.Of(right.Type)}",
+                $"{OperatorSpelling.Of(binary.Operator)} compares two bools or two reals, but this compares {TypeText.Of(left.Type)} with {TypeText.Of(right.Type)}",
                 binary.Span);
             return null;
         }
@@ -232,6 +232,4 @@ internal sealed partial class ExpressionBinder(IReadOnlyDictionary<string, Symbo
     }
 
     private Fraction? ConstantValue(BoundExpression node) => _constants.TryGetValue(node, out var value) ? value : null;
-
-    private static string OperatorText(BinaryOperator op) => OperatorSpelling.Of(op);
 }

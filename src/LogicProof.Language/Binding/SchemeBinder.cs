@@ -90,27 +90,21 @@ public static class SchemeBinder
 
         if (target.Kind is SymbolKind.Input or SymbolKind.Setting)
         {
-            diagnostics.Add(new Diagnostic(
+            diagnostics.Error(
                 LanguageCodes.TargetNotAssignable,
-                Severity.Error,
                 $"'{target.Name}' is {(target.Kind == SymbolKind.Input ? "an input" : "a setting")} and cannot be assigned; only locals and outputs can",
-                equation.TargetSpan)
-            {
-                Related = [new RelatedLocation($"'{target.Name}' is declared here", target.DeclarationSpan)],
-            });
+                equation.TargetSpan,
+                new RelatedLocation($"'{target.Name}' is declared here", target.DeclarationSpan));
             return null;
         }
 
         if (!assigned.TryAdd(target.Name, equation))
         {
-            diagnostics.Add(new Diagnostic(
+            diagnostics.Error(
                 LanguageCodes.AssignedTwice,
-                Severity.Error,
                 $"'{target.Name}' is assigned by two equations; each local or output has exactly one",
-                equation.TargetSpan)
-            {
-                Related = [new RelatedLocation($"the first equation of '{target.Name}'", assigned[target.Name].TargetSpan)],
-            });
+                equation.TargetSpan,
+                new RelatedLocation($"the first equation of '{target.Name}'", assigned[target.Name].TargetSpan));
             return null;
         }
 
@@ -118,8 +112,6 @@ public static class SchemeBinder
     }
 
     private static void ReportDuplicateProperty(string what, string name, SourceSpan span, SourceSpan first, DiagnosticBag diagnostics) =>
-        diagnostics.Add(new Diagnostic(LanguageCodes.DuplicatePropertyName, Severity.Error, $"two {what}s are named '{name}'", span)
-        {
-            Related = [new RelatedLocation($"the first {what} named '{name}'", first)],
-        });
+        diagnostics.Error(
+            LanguageCodes.DuplicatePropertyName, $"two {what}s are named '{name}'", span, new RelatedLocation($"the first {what} named '{name}'", first));
 }

@@ -20,26 +20,4 @@ internal static class DecimalNumber
         var numerator = BigInteger.Parse(digits, NumberStyles.None, CultureInfo.InvariantCulture);
         return new Fraction(numerator, BigInteger.Pow(10, text.Length - dot - 1));
     }
-
-    /// <summary>True for one or more ASCII digits, optionally followed by a point and one or more digits.</summary>
-    public static bool IsWellFormed(ReadOnlySpan<char> text)
-    {
-        var dot = text.IndexOf('.');
-        var whole = dot < 0 ? text : text[..dot];
-        var fraction = dot < 0 ? "1".AsSpan() : text[(dot + 1)..];
-        return whole.Length > 0 && fraction.Length > 0 && AllDigits(whole) && AllDigits(fraction);
-    }
-
-    private static bool AllDigits(ReadOnlySpan<char> text)
-    {
-        foreach (var c in text)
-        {
-            if (c is < '0' or > '9')
-            {
-                return false;
-            }
-        }
-
-        return true;
-    }
 }

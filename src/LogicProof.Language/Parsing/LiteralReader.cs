@@ -10,22 +10,6 @@ namespace LogicProof.Language.Parsing;
 /// <summary>Reads literal tokens: numbers (exact), texts in double quotes, durations and setting/init values.</summary>
 internal sealed class LiteralReader(SourceText source, DiagnosticBag diagnostics)
 {
-    public static string Unquote(string quoted)
-    {
-        var inner = quoted.AsSpan(1, quoted.Length - 2);
-        var builder = new StringBuilder(inner.Length);
-        for (var i = 0; i < inner.Length; i++)
-        {
-            builder.Append(inner[i]);
-            if (inner[i] == '"')
-            {
-                i++; // the second quote of an escaped pair
-            }
-        }
-
-        return builder.ToString();
-    }
-
     public string? Description(LogicProofParser.DescriptionContext? context) =>
         context is null ? null : Unquote(source.TextOf(context.STRING().Symbol));
 
@@ -92,5 +76,21 @@ internal sealed class LiteralReader(SourceText source, DiagnosticBag diagnostics
         }
 
         return cycles is { } c ? DurationSyntax.FromCycles(c, text, span) : DurationSyntax.FromMilliseconds(milliseconds ?? Fraction.Zero, text, span);
+    }
+
+    private static string Unquote(string quoted)
+    {
+        var inner = quoted.AsSpan(1, quoted.Length - 2);
+        var builder = new StringBuilder(inner.Length);
+        for (var i = 0; i < inner.Length; i++)
+        {
+            builder.Append(inner[i]);
+            if (inner[i] == '"')
+            {
+                i++; // the second quote of an escaped pair
+            }
+        }
+
+        return builder.ToString();
     }
 }

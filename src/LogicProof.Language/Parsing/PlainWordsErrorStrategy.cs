@@ -21,18 +21,12 @@ internal sealed class PlainWordsErrorStrategy : DefaultErrorStrategy
     protected override void ReportFailedPredicate(Parser recognizer, FailedPredicateException e) =>
         Report(recognizer, e.OffendingToken, recognizer.GetExpectedTokens(), e);
 
-    protected override void ReportUnwantedToken(Parser recognizer)
-    {
-        if (InErrorRecoveryMode(recognizer))
-        {
-            return;
-        }
+    protected override void ReportUnwantedToken(Parser recognizer) => ReportAtCurrentToken(recognizer);
 
-        BeginErrorCondition(recognizer);
-        Report(recognizer, recognizer.CurrentToken, GetExpectedTokens(recognizer), null);
-    }
+    protected override void ReportMissingToken(Parser recognizer) => ReportAtCurrentToken(recognizer);
 
-    protected override void ReportMissingToken(Parser recognizer)
+    /// <summary>An extra or a missing token: reported once, at the current token, unless already recovering.</summary>
+    private void ReportAtCurrentToken(Parser recognizer)
     {
         if (InErrorRecoveryMode(recognizer))
         {

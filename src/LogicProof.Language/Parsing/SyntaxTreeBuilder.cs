@@ -118,10 +118,11 @@ internal sealed class SyntaxTreeBuilder
         if (into.BreakerModel is { } first)
         {
             var keyword = _source.SpanOf(breaker.BREAKER_MODEL().Symbol);
-            _diagnostics.Add(new Diagnostic(LanguageCodes.DuplicateBreakerModel, Severity.Error, "a scheme has at most one breaker_model block", keyword)
-            {
-                Related = [new RelatedLocation("the first breaker_model block", first.Span)],
-            });
+            _diagnostics.Error(
+                LanguageCodes.DuplicateBreakerModel,
+                "a scheme has at most one breaker_model block",
+                keyword,
+                new RelatedLocation("the first breaker_model block", first.Span));
             return;
         }
 

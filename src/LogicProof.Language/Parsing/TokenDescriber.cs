@@ -89,7 +89,7 @@ internal static class TokenDescriber
         };
     }
 
-    public static string DescribeTokenType(int type) => type switch
+    private static string DescribeTokenType(int type) => type switch
     {
         TokenConstants.EOF => "the end of the file",
         LogicProofParser.IDENT => "a name",

@@ -10,6 +10,9 @@ internal static class NumberText
     /// <summary>The decimal text, or <paramref name="fallback"/> when the expansion does not terminate (1/3).</summary>
     public static string Format(Fraction value, string fallback) => TryFormat(value) ?? fallback;
 
+    /// <summary>The decimal text, or the fraction's culture-invariant text when the expansion does not terminate.</summary>
+    public static string Format(Fraction value) => TryFormat(value) ?? value.ToString(CultureInfo.InvariantCulture);
+
     public static string? TryFormat(Fraction value)
     {
         var reduced = value.Reduce();

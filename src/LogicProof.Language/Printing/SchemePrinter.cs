@@ -1,9 +1,7 @@
-using System.Globalization;
 using System.Text;
 using LogicProof.Core.Threading;
 using LogicProof.Language.Binding;
 using LogicProof.Language.Syntax;
-using ValueType = LogicProof.Language.Syntax.ValueType;
 
 namespace LogicProof.Language.Printing;
 
@@ -31,7 +29,7 @@ public static class SchemePrinter
     {
         var output = new StringBuilder();
         output.Append("scheme ").Append(scheme.Name).Append(Description(scheme.Description)).Append(";\n");
-        output.Append("frequency ").Append(NumberText.Format(scheme.FrequencyHz, scheme.FrequencyHz.ToString(CultureInfo.InvariantCulture))).Append(" Hz;\n");
+        output.Append("frequency ").Append(NumberText.Format(scheme.FrequencyHz)).Append(" Hz;\n");
         output.Append("scan ").Append(scheme.ScanInterval.Text).Append(";\n");
         Section(output, "inputs", scheme.Inputs, Input);
         Section(output, "settings", scheme.Settings, Setting);
@@ -85,11 +83,11 @@ public static class SchemePrinter
 
     private static void Input(StringBuilder output, InputDeclarationSyntax input)
     {
-        output.Append(input.Name).Append(" : ").Append(TypeName(input.Type));
+        output.Append(input.Name).Append(" : ").Append(TypeText.Of(input.Type));
         if (input.Range is { } range)
         {
-            output.Append(" range ").Append(NumberText.Format(range.Low, range.Low.ToString(CultureInfo.InvariantCulture)))
-                .Append(" .. ").Append(NumberText.Format(range.High, range.High.ToString(CultureInfo.InvariantCulture)));
+            output.Append(" range ").Append(NumberText.Format(range.Low))
+                .Append(" .. ").Append(NumberText.Format(range.High));
         }
 
         output.Append(Description(input.Description));
@@ -97,14 +95,14 @@ public static class SchemePrinter
 
     private static void Setting(StringBuilder output, SettingDeclarationSyntax setting)
     {
-        output.Append(setting.Name).Append(" : ").Append(TypeName(setting.Type)).Append(" = ");
+        output.Append(setting.Name).Append(" : ").Append(TypeText.Of(setting.Type)).Append(" = ");
         ExpressionPrinter.Write(output, setting.Value);
         output.Append(Description(setting.Description));
     }
 
     private static void Variable(StringBuilder output, VariableDeclarationSyntax variable)
     {
-        output.Append(variable.Name).Append(" : ").Append(TypeName(variable.Type));
+        output.Append(variable.Name).Append(" : ").Append(TypeText.Of(variable.Type));
         if (variable.Initial is { } initial)
         {
             output.Append(" init ");
@@ -161,8 +159,6 @@ public static class SchemePrinter
         output.Append("require ").Append(requirement.Name).Append(": ");
         ExpressionPrinter.Write(output, requirement.Formula);
     }
-
-    private static string TypeName(ValueType type) => TypeText.Of(type);
 
     private static string Description(string? description) =>
         description is null ? string.Empty : " \"" + description.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"";

@@ -42,7 +42,20 @@ internal static class SourceReader
         return Decode(path, bytes, diagnostics);
     }
 
-    public static SourceText Decode(string path, ReadOnlySpan<byte> bytes, DiagnosticBag diagnostics)
+    /// <summary>Checks that text handed over as a string has no NUL character (a sign of a binary file).</summary>
+    public static void CheckText(SourceText source, DiagnosticBag diagnostics)
+    {
+        var nul = source.Content.IndexOf('\0', StringComparison.Ordinal);
+        if (nul >= 0)
+        {
+            diagnostics.Error(
+                LanguageCodes.BinaryFile,
+                "the text contains a NUL character: it looks like a binary file, not a scheme",
+                source.Span(nul, 1));
+        }
+    }
+
+    private static SourceText Decode(string path, ReadOnlySpan<byte> bytes, DiagnosticBag diagnostics)
     {
         if (bytes.StartsWith(Utf8Bom))
         {
@@ -78,19 +91,6 @@ internal static class SourceReader
         }
 
         return source;
-    }
-
-    /// <summary>Checks that text handed over as a string has no NUL character (a sign of a binary file).</summary>
-    public static void CheckText(SourceText source, DiagnosticBag diagnostics)
-    {
-        var nul = source.Content.IndexOf('\0', StringComparison.Ordinal);
-        if (nul >= 0)
-        {
-            diagnostics.Error(
-                LanguageCodes.BinaryFile,
-                "the text contains a NUL character: it looks like a binary file, not a scheme",
-                source.Span(nul, 1));
-        }
     }
 
     private static int FirstInvalidUtf8Byte(ReadOnlySpan<byte> bytes)

@@ -46,7 +46,7 @@ public static class ConeSlicer
     {
         var marked = new List<int>();
         var pending = new Stack<int>();
-        var collector = new StepReadCollector();
+        var collector = new CellReadCollector();
         var reads = new List<CellReadExpression>();
         foreach (var root in roots)
         {
@@ -177,7 +177,7 @@ public static class ConeSlicer
             }
         }
 
-        var collector = new StepReadCollector();
+        var collector = new CellReadCollector();
         var reads = new List<CellReadExpression>();
         foreach (var (step, _) in keptSteps)
         {

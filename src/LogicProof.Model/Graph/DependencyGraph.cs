@@ -53,8 +53,6 @@ public sealed class DependencyGraph
 
     public IEnumerable<DependencyEdge> ReadsBy(DependencyVertex vertex) => _graph.InEdges(vertex);
 
-    public IEnumerable<DependencyEdge> ReadersOf(DependencyVertex vertex) => _graph.OutEdges(vertex);
-
     /// <summary>
     /// The cone of influence of a name: the name itself and every vertex that can affect it through equations,
     /// function blocks and last-scan reads, transitively; in <see cref="Vertices"/> order.

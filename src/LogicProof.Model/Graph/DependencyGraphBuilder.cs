@@ -1,4 +1,3 @@
-using System.Globalization;
 using LogicProof.Core.Text;
 using LogicProof.Language.Binding;
 using LogicProof.Language.Syntax;
@@ -44,7 +43,7 @@ internal sealed class DependencyGraphBuilder
             for (var i = 0; i < scheme.Assumptions.Count; i++)
             {
                 var assumption = scheme.Assumptions[i];
-                var name = assumption.Name ?? string.Create(CultureInfo.InvariantCulture, $"assume#{i + 1}");
+                var name = HiddenNames.Assumption(assumption.Name, i);
                 var vertex = builder.AddVertex(name, DependencyVertexKind.Assumption, assumption.Syntax.Span, null);
                 builder.AddReads(assumption.Formula, vertex, -1, assumption.Syntax.Span);
             }
@@ -86,7 +85,7 @@ internal sealed class DependencyGraphBuilder
                     continue;
                 case BoundFunctionBlockCall call:
                     var kindName = BoundTree.BlockName(call.Kind);
-                    var name = string.Create(CultureInfo.InvariantCulture, $"{owner.Name}.{kindName}#{numbers[call]}");
+                    var name = HiddenNames.Instance(owner.Name, kindName, numbers[call]);
                     var detail = call.Preset is { } preset ? $"{kindName} {preset.Value.Text}" : kindName;
                     var instance = AddVertex(name, DependencyVertexKind.FunctionBlock, call.Span, detail);
                     AddEdge(instance, consumer, DependencyReadKind.SameScan, span);
@@ -117,12 +116,7 @@ internal sealed class DependencyGraphBuilder
 
     private DependencyVertex AddVertex(string name, DependencyVertexKind kind, SourceSpan span, string? detail)
     {
-        var unique = name;
-        for (var suffix = 2; _byName.ContainsKey(unique); suffix++)
-        {
-            unique = string.Create(CultureInfo.InvariantCulture, $"{name}~{suffix}");
-        }
-
+        var unique = HiddenNames.Unique(name, _byName);
         var vertex = new DependencyVertex(unique, kind, span, detail);
         _vertices.Add(vertex);
         _byName.Add(unique, vertex);

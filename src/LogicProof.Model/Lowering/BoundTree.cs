@@ -80,7 +80,7 @@ internal static class BoundTree
     /// True for the nodes that become an instance with its own memory and a numbered hidden name
     /// (<c>X.TON#1</c>, <c>R.ONCE#2</c>): function-block calls, past-time operators and SINCE.
     /// </summary>
-    public static bool IsNumberedInstance(BoundExpression expression) =>
+    private static bool IsNumberedInstance(BoundExpression expression) =>
         expression is BoundFunctionBlockCall or BoundTemporal
         || expression is BoundBinary { Operator: BinaryOperator.Since };
 

@@ -1,4 +1,3 @@
-using System.Globalization;
 using Fractions;
 using LogicProof.Core.Diagnostics;
 using LogicProof.Core.Text;
@@ -97,7 +96,7 @@ internal sealed class ExpressionLowerer
     public string NextInstanceName(string kind)
     {
         _instanceCount++;
-        return string.Create(CultureInfo.InvariantCulture, $"{_owner}.{kind}#{_instanceCount}");
+        return HiddenNames.Instance(_owner, kind, _instanceCount);
     }
 
     public PresetRounding? Preset(BoundDuration duration)

@@ -68,7 +68,7 @@ internal static class MemoryPowerUpResolver
         var sources = new List<int>(equationStepCount * 4);
         var targets = new List<int>(equationStepCount * 4);
         var lastScan = new List<bool>(equationStepCount * 4);
-        var collector = new StepReadCollector();
+        var collector = new CellReadCollector();
         var reads = new List<CellReadExpression>();
         for (var s = 0; s < equationStepCount; s++)
         {

@@ -1,4 +1,3 @@
-using System.Globalization;
 using LogicProof.Core.Text;
 using LogicProof.Model.Scan;
 
@@ -47,7 +46,7 @@ internal sealed class ModelAssembly
     public int AddHiddenCell(string name, SignalType type, SourceSpan span)
     {
         var index = Cells.Count;
-        var unique = UniqueName(name);
+        var unique = HiddenNames.Unique(name, _cellByName);
         Cells.Add(new Cell(index, unique, CellKind.Hidden, type, span));
         _cellByName.Add(unique, index);
         _previousSlotOfCell.Add(-1);
@@ -81,22 +80,4 @@ internal sealed class ModelAssembly
     public int PreviousSlotOrNone(int cell) => _previousSlotOfCell[cell];
 
     public void SetPowerUp(int slot, PowerUp powerUp) => Slots[slot] = Slots[slot] with { PowerUp = powerUp };
-
-    /// <summary>The name itself when free, otherwise the name with the first free suffix <c>~2</c>, <c>~3</c>, ...</summary>
-    private string UniqueName(string name)
-    {
-        if (!_cellByName.ContainsKey(name))
-        {
-            return name;
-        }
-
-        for (var suffix = 2; ; suffix++)
-        {
-            var candidate = string.Create(CultureInfo.InvariantCulture, $"{name}~{suffix}");
-            if (!_cellByName.ContainsKey(candidate))
-            {
-                return candidate;
-            }
-        }
-    }
 }

@@ -1,4 +1,3 @@
-using System.Globalization;
 using LogicProof.Core.Diagnostics;
 using LogicProof.Language.Binding;
 using LogicProof.Language.Syntax;
@@ -204,7 +203,7 @@ public static class ModelBuilder
         for (var i = 0; i < scheme.Assumptions.Count; i++)
         {
             var assumption = scheme.Assumptions[i];
-            var cellName = assumption.Name ?? string.Create(CultureInfo.InvariantCulture, $"assume#{i + 1}");
+            var cellName = HiddenNames.Assumption(assumption.Name, i);
             var cell = lowerer.LowerFormula(cellName, assumption.Formula, assumption.Syntax.Span);
             assumptions.Add(new ModelAssumption(assumption.Name, cell, assumption.Syntax.Span));
         }

@@ -65,7 +65,7 @@ internal static class ModelConsistency
             }
         }
 
-        var collector = new StepReadCollector();
+        var collector = new CellReadCollector();
         var reads = new List<CellReadExpression>();
         for (var s = 0; s < model.Steps.Count; s++)
         {

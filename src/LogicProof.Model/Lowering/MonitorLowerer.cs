@@ -1,4 +1,3 @@
-using Fractions;
 using LogicProof.Language.Binding;
 using LogicProof.Model.Scan;
 
@@ -28,7 +27,7 @@ internal sealed class MonitorLowerer(ModelAssembly model, ExpressionLowerer expr
         {
             case TemporalOperator.Prev:
                 Assign(cell, operand, temporal);
-                return LastScan(cell, type == SignalType.Real ? new KnownRealPowerUp(Fraction.Zero) : new KnownBoolPowerUp(false));
+                return LastScan(cell, MemoryPowerUpResolver.Default(type));
             case TemporalOperator.Rose:
                 Assign(cell, operand, temporal);
                 return new AndExpression([now, new NotExpression(LastScan(cell, new KnownBoolPowerUp(false)))]);

@@ -4,6 +4,7 @@ using LogicProof.Core.Text;
 using LogicProof.Language.Binding;
 using LogicProof.Language.Parsing;
 using LogicProof.Language.Syntax;
+using LogicProof.Model.Lowering;
 using LogicProof.Model.Rules;
 using LogicProof.Model.Simulation;
 using LogicProof.Model.Timing;
@@ -197,45 +198,17 @@ public static class BreakerModelExpander
     {
         foreach (var assumption in scheme.Assumptions)
         {
-            var read = FirstNameRead(assumption.Syntax.Formula, statuses);
+            var read = BoundTree.PreOrder(assumption.Formula)
+                .OfType<BoundSymbolReference>()
+                .FirstOrDefault(reference => statuses.Contains(reference.Symbol.Name, StringComparer.OrdinalIgnoreCase));
             if (read is not null)
             {
                 diagnostics.Warning(
                     RuleCodes.AssumptionReadsModelledStatus,
-                    $"this assumption reads {read}, which the breaker model now drives; an assumption that disagrees with the modelled breaker (for example during travel, when 52a and 52b are both FALSE) silently removes its behaviour from every proof",
+                    $"this assumption reads {read.Symbol.Name}, which the breaker model now drives; an assumption that disagrees with the modelled breaker (for example during travel, when 52a and 52b are both FALSE) silently removes its behaviour from every proof",
                     assumption.Syntax.Span);
             }
         }
-    }
-
-    private static string? FirstNameRead(ExpressionSyntax formula, IReadOnlyList<string> names)
-    {
-        var pending = new Stack<ExpressionSyntax>();
-        pending.Push(formula);
-        while (pending.Count > 0)
-        {
-            switch (pending.Pop())
-            {
-                case NameSyntax name when names.Contains(name.Name, StringComparer.OrdinalIgnoreCase):
-                    return name.Name;
-                case UnarySyntax unary:
-                    pending.Push(unary.Operand);
-                    break;
-                case BinarySyntax binary:
-                    pending.Push(binary.Left);
-                    pending.Push(binary.Right);
-                    break;
-                case CallSyntax call:
-                    foreach (var argument in call.Arguments)
-                    {
-                        pending.Push(argument.Value);
-                    }
-
-                    break;
-            }
-        }
-
-        return null;
     }
 
     private static SchemeSyntax? AddToScheme(SchemeSyntax scheme, BreakerProgram program, DiagnosticBag diagnostics)

@@ -13,23 +13,14 @@ public static class RuleTemplate
     public static IReadOnlyList<string> Placeholders(string template)
     {
         ArgumentNullException.ThrowIfNull(template);
-        var names = new List<string>();
-        foreach (var (name, _) in Scan(template))
-        {
-            if (name is not null && !names.Contains(name, StringComparer.OrdinalIgnoreCase))
-            {
-                names.Add(name);
-            }
-        }
-
-        return names;
+        return [.. Scan(template).Select(p => p.Name).Distinct(StringComparer.OrdinalIgnoreCase)];
     }
 
     /// <summary>The placeholders outside square brackets: a template cannot be rendered without them.</summary>
     public static IReadOnlyList<string> MandatoryPlaceholders(string template)
     {
         ArgumentNullException.ThrowIfNull(template);
-        return [.. Scan(template).Where(p => p.Name is not null && !p.Optional).Select(p => p.Name!).Distinct(StringComparer.OrdinalIgnoreCase)];
+        return [.. Scan(template).Where(p => !p.Optional).Select(p => p.Name).Distinct(StringComparer.OrdinalIgnoreCase)];
     }
 
     /// <summary>
@@ -95,7 +86,7 @@ public static class RuleTemplate
         return output.ToString();
     }
 
-    private static IEnumerable<(string? Name, bool Optional)> Scan(string template)
+    private static IEnumerable<(string Name, bool Optional)> Scan(string template)
     {
         var optional = false;
         for (var i = 0; i < template.Length; i++)

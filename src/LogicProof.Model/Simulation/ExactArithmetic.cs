@@ -62,6 +62,21 @@ internal static class ExactArithmetic
         return left.CompareTo(right);
     }
 
+    /// <summary>The smallest integer at or above <paramref name="value"/>.</summary>
+    public static BigInteger Ceiling(Fraction value)
+    {
+        var numerator = value.Numerator;
+        var denominator = value.Denominator;
+        if (denominator.Sign < 0)
+        {
+            numerator = -numerator;
+            denominator = -denominator;
+        }
+
+        var quotient = BigInteger.DivRem(numerator, denominator, out var remainder);
+        return remainder.Sign > 0 ? quotient + 1 : quotient;
+    }
+
     private static bool TrySmall(Fraction value, out long numerator, out long denominator)
     {
         var n = value.Numerator;

@@ -49,13 +49,6 @@ public sealed class ScanInputs : IEquatable<ScanInputs>
 
     public ScanInputs Clone() => new(this);
 
-    public void CopyFrom(ScanInputs other)
-    {
-        RequireSameModel(other);
-        other._bools.CopyTo(_bools, 0);
-        other._reals.CopyTo(_reals, 0);
-    }
-
     /// <summary>Whether the input <paramref name="cell"/> has the same value here and in <paramref name="other"/>.</summary>
     public bool SameValue(ScanInputs other, int cell)
     {

@@ -29,9 +29,6 @@ public sealed class ScanState : IEquatable<ScanState>
         Reals = (Fraction[])source.Reals.Clone();
     }
 
-    /// <summary>Number of state slots, the valid slot indexes being 0 to SlotCount - 1.</summary>
-    public int SlotCount => Layout.Slots.Count;
-
     internal ScanStateLayout Layout { get; }
 
     internal bool[] Bools { get; }
@@ -114,7 +111,7 @@ public sealed class ScanState : IEquatable<ScanState>
         return hash.ToHashCode();
     }
 
-    internal void RequireSameModel(ScanState other)
+    private void RequireSameModel(ScanState other)
     {
         if (!ReferenceEquals(Layout, other.Layout))
         {

@@ -46,7 +46,7 @@ internal sealed class ScanStateLayout
 
     public int RealCount { get; }
 
-    public static SlotStorage StorageOf(StateSlot slot) => slot.Kind switch
+    private static SlotStorage StorageOf(StateSlot slot) => slot.Kind switch
     {
         StateSlotKind.TimerCounter => SlotStorage.Counter,
         StateSlotKind.PreviousValue when slot.Type == SignalType.Real => SlotStorage.Real,

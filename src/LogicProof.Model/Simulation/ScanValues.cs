@@ -41,10 +41,4 @@ public sealed class ScanValues
         Bools[cell] == other.Bools[cell] && Reals[cell].CompareTo(other.Reals[cell]) == 0;
 
     public ScanValues Clone() => new(this);
-
-    public void CopyFrom(ScanValues other)
-    {
-        other.Bools.CopyTo(Bools, 0);
-        other.Reals.CopyTo(Reals, 0);
-    }
 }

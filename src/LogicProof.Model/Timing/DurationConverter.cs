@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Numerics;
 using Fractions;
 using LogicProof.Core.Diagnostics;
 using LogicProof.Language.Syntax;
@@ -49,7 +48,7 @@ public sealed class DurationConverter(ScanTiming timing)
     public PresetRounding? Convert(DurationSyntax duration, DiagnosticBag diagnostics)
     {
         var exact = ExactScans(duration);
-        var scans = Ceiling(exact);
+        var scans = ExactArithmetic.Ceiling(exact);
         if (scans.Sign < 0 || scans > MaxPresetScans)
         {
             diagnostics.Error(
@@ -63,19 +62,5 @@ public sealed class DurationConverter(ScanTiming timing)
         }
 
         return new PresetRounding(duration.Text, exact, (int)scans, duration.Span);
-    }
-
-    private static BigInteger Ceiling(Fraction value)
-    {
-        var numerator = value.Numerator;
-        var denominator = value.Denominator;
-        if (denominator.Sign < 0)
-        {
-            numerator = -numerator;
-            denominator = -denominator;
-        }
-
-        var quotient = BigInteger.DivRem(numerator, denominator, out var remainder);
-        return remainder.Sign > 0 ? quotient + 1 : quotient;
     }
 }

@@ -56,21 +56,7 @@ public sealed class InputTrace
     /// <summary>The first scan that starts at or after <paramref name="timeMs"/>: ⌈t/Δ⌉.</summary>
     public static long FirstScanAtOrAfter(Fraction timeMs, ScanTiming timing)
     {
-        var quotient = timeMs / timing.ScanMilliseconds;
-        var numerator = quotient.Numerator;
-        var denominator = quotient.Denominator;
-        if (denominator.Sign < 0)
-        {
-            numerator = -numerator;
-            denominator = -denominator;
-        }
-
-        var scans = BigInteger.DivRem(numerator, denominator, out var remainder);
-        if (remainder.Sign > 0)
-        {
-            scans += 1;
-        }
-
+        var scans = ExactArithmetic.Ceiling(timeMs / timing.ScanMilliseconds);
         return (long)BigInteger.Max(scans, BigInteger.Zero);
     }
 

@@ -1,8 +1,6 @@
-using Fractions;
 using LogicProof.Core.Diagnostics;
 using LogicProof.Core.Text;
 using LogicProof.Model.Scan;
-using LogicProof.Model.Simulation;
 
 namespace LogicProof.Model.Traces;
 
@@ -79,6 +77,4 @@ public static class InputTraceReader
             _ when text.Equals("FALSE", StringComparison.OrdinalIgnoreCase) => false,
             _ => null,
         };
-
-    internal static Fraction? ParseReal(string text) => ExactNumberText.TryParse(text, out var value) ? value : null;
 }

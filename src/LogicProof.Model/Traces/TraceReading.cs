@@ -12,7 +12,6 @@ internal sealed class TraceReading(SourceText source, ScanModel model)
     private readonly DiagnosticBag _diagnostics = new();
     private readonly int[] _lineStarts = LineStarts(source.Content);
     private readonly List<InputTraceRow> _rows = [];
-    private readonly List<int> _rowLines = [];
     private int[] _cellOfColumn = [];
     private Fraction? _endMs;
     private int _endLine;
@@ -180,7 +179,6 @@ internal sealed class TraceReading(SourceText source, ScanModel model)
         if (time is { } t)
         {
             _rows.Add(new InputTraceRow(t, inputs) { Line = record.Line });
-            _rowLines.Add(record.Line);
         }
 
         return inputs;
@@ -194,7 +192,7 @@ internal sealed class TraceReading(SourceText source, ScanModel model)
             return null;
         }
 
-        if (InputTraceReader.ParseReal(cell.Text) is not { } time)
+        if (!ExactNumberText.TryParse(cell.Text, out var time))
         {
             Error(TraceCodes.BadTime, $"'{Shown(cell.Text)}' is not a time in ms: use an exact decimal such as 12.5 (with a point).", record.Line, cell);
             return null;
@@ -209,7 +207,7 @@ internal sealed class TraceReading(SourceText source, ScanModel model)
         var previousTime = _endMs ?? (_rows.Count > 0 ? _rows[^1].TimeMs : (Fraction?)null);
         if (previousTime is { } before && time.CompareTo(before) < 0)
         {
-            var previousLine = _endMs is not null ? _endLine : _rowLines[^1];
+            var previousLine = _endMs is not null ? _endLine : _rows[^1].Line;
             _diagnostics.Add(new Diagnostic(
                 TraceCodes.DecreasingTime,
                 Severity.Error,
@@ -241,7 +239,7 @@ internal sealed class TraceReading(SourceText source, ScanModel model)
             return;
         }
 
-        if (InputTraceReader.ParseReal(text.Text) is not { } real)
+        if (!ExactNumberText.TryParse(text.Text, out var real))
         {
             Error(TraceCodes.BadRealValue, $"'{Shown(text.Text)}' is not a value of real input '{cell.Name}': use an exact decimal such as -0.25 (with a point).", line, text);
             return;
@@ -271,7 +269,7 @@ internal sealed class TraceReading(SourceText source, ScanModel model)
         var scanText = ExactNumberText.FormatExact(timing.ScanMilliseconds);
         if (_rows[0].TimeMs.CompareTo(Fraction.Zero) > 0)
         {
-            Warning(TraceCodes.LateFirstRow, $"the first row starts at {ExactNumberText.FormatExact(_rows[0].TimeMs)} ms; before it every input is FALSE (or 0).", _rowLines[0]);
+            Warning(TraceCodes.LateFirstRow, $"the first row starts at {ExactNumberText.FormatExact(_rows[0].TimeMs)} ms; before it every input is FALSE (or 0).", _rows[0].Line);
         }
 
         for (var i = 0; i < _rows.Count; i++)
@@ -283,7 +281,7 @@ internal sealed class TraceReading(SourceText source, ScanModel model)
                 Warning(
                     TraceCodes.RowNeverInForce,
                     $"no scan sees this row: the next row (at {ExactNumberText.FormatExact(next)} ms) replaces it before the next scan starts (scans every {scanText} ms).",
-                    _rowLines[i]);
+                    _rows[i].Line);
             }
         }
     }

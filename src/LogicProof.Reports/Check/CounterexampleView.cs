@@ -19,6 +19,9 @@ public sealed record CounterexampleView(
 {
     public IReadOnlyList<PowerUpNote> PowerUp { get; init; } = [];
 
+    /// <summary>The time at which the failing scan starts, in ms from power-up.</summary>
+    public Fractions.Fraction FailingMilliseconds => Timing.TimeOfScan(Trace.FailingScan);
+
     /// <summary>The time at which the failing scan ends, in ms from power-up: the length of the trace.</summary>
     public Fractions.Fraction EndMilliseconds => Timing.TimeOfScan(Trace.FailingScan + 1);
 }

@@ -109,7 +109,7 @@ public static class JUnitReportRenderer
             xml.WriteStartElement("failure");
             xml.WriteAttributeString("message", errors.Count == 1 ? "1 error" : ReportSentences.Count(errors.Count) + " errors");
             xml.WriteAttributeString("type", "static");
-            xml.WriteString(XmlText.Clean(string.Join("\n", errors.Select(DiagnosticLine))));
+            xml.WriteString(XmlText.Clean(string.Join("\n", errors.Select(ReportSentences.DiagnosticLine))));
             xml.WriteEndElement();
         }
 
@@ -152,14 +152,11 @@ public static class JUnitReportRenderer
             lines.Add(ReportSentences.Breaker(file.BreakerModelled));
         }
 
-        lines.AddRange(file.Diagnostics.Select(DiagnosticLine));
+        lines.AddRange(file.Diagnostics.Select(ReportSentences.DiagnosticLine));
         lines.AddRange(file.Properties.Where(p => p.Statement is not null).Select(p => $"{p.Name}: {p.Statement}"));
         lines.AddRange(file.PowerUpNotes.Select(note => "power-up: " + ReportSentences.PowerUp(note)));
         return string.Join("\n", lines);
     }
-
-    private static string DiagnosticLine(Diagnostic diagnostic) =>
-        $"{diagnostic.Span}: {JsonReportRenderer.SeverityName(diagnostic.Severity)} {diagnostic.Code}: {diagnostic.Message}";
 
     private static void StartCase(XmlWriter xml, string name, string className, TimeSpan time)
     {

@@ -1,5 +1,4 @@
 using System.Text.Json;
-using Fractions;
 using LogicProof.Core.Diagnostics;
 using LogicProof.Proof.Results;
 using LogicProof.Reports.Exports;
@@ -137,7 +136,7 @@ public static class JsonReportRenderer
     {
         json.WriteStartObject();
         JsonOutput.String(json, "code", diagnostic.Code);
-        JsonOutput.String(json, "severity", SeverityName(diagnostic.Severity));
+        JsonOutput.String(json, "severity", ReportSentences.SeverityName(diagnostic.Severity));
         JsonOutput.String(json, "message", diagnostic.Message);
         JsonOutput.Place(json, diagnostic.Span);
         json.WriteStartArray("related");
@@ -161,7 +160,7 @@ public static class JsonReportRenderer
         JsonOutput.OptionalString(json, "statement", property.Statement);
         JsonOutput.Place(json, property.Span);
         JsonOutput.String(json, "verdict", ReportSentences.Verdict(property.Verdict));
-        JsonOutput.Exact(json, "elapsedMs", new Fraction(property.Elapsed.Ticks, TimeSpan.TicksPerMillisecond));
+        JsonOutput.Milliseconds(json, "elapsedMs", property.Elapsed);
         switch (property.Verdict)
         {
             case Proved proved:
@@ -194,11 +193,4 @@ public static class JsonReportRenderer
 
         json.WriteEndObject();
     }
-
-    internal static string SeverityName(Severity severity) => severity switch
-    {
-        Severity.Error => "error",
-        Severity.Warning => "warning",
-        _ => "note",
-    };
 }

@@ -54,7 +54,7 @@ internal sealed class SarifDescriptors
             descriptors.Add(new SarifDescriptor(
                 code.Key,
                 code.Key,
-                $"LogicProof {JsonReportRenderer.SeverityName(first.Severity)} {code.Key}.",
+                $"LogicProof {ReportSentences.SeverityName(first.Severity)} {code.Key}.",
                 $"LogicProof diagnostic {code.Key}, for example: {first.Message}",
                 "Each result's message says what was found and where; diagnostic codes are stable across releases.",
                 "diagnostic"));

@@ -1,5 +1,4 @@
 using System.Text.Json;
-using Fractions;
 using LogicProof.Model.Scan;
 using LogicProof.Proof.Results;
 using LogicProof.Reports.Exports;
@@ -110,7 +109,7 @@ public static class SarifReportRenderer
         {
             json.WriteStartObject();
             RuleReference(json, descriptors, diagnostic.Code);
-            JsonOutput.String(json, "level", JsonReportRenderer.SeverityName(diagnostic.Severity));
+            JsonOutput.String(json, "level", ReportSentences.SeverityName(diagnostic.Severity));
             Message(json, "message", diagnostic.Message);
             Locations(json, diagnostic.Span.File.Length > 0 ? diagnostic.Span : FileSpan(file), workingDirectory);
             if (diagnostic.Related.Count > 0)
@@ -157,7 +156,7 @@ public static class SarifReportRenderer
     private static void WritePropertyResult(
         Utf8JsonWriter json, FileCheckReport file, PropertyReport property, SarifDescriptors descriptors, string workingDirectory)
     {
-        var origin = property.Origin == PropertyOrigin.Rule ? "Rule" : "Requirement";
+        var origin = ReportSentences.OriginAtStart(property.Origin);
         json.WriteStartObject();
         RuleReference(json, descriptors, SarifDescriptors.PropertyId(file, property));
         switch (property.Verdict)
@@ -184,7 +183,7 @@ public static class SarifReportRenderer
         json.WriteStartObject("properties");
         JsonOutput.String(json, "verdict", ReportSentences.Verdict(property.Verdict));
         JsonOutput.String(json, "origin", ReportSentences.Origin(property.Origin));
-        JsonOutput.Exact(json, "elapsedMs", new Fraction(property.Elapsed.Ticks, TimeSpan.TicksPerMillisecond));
+        JsonOutput.Milliseconds(json, "elapsedMs", property.Elapsed);
         if (property.Counterexample is { } counterexample)
         {
             json.WritePropertyName("counterexample");

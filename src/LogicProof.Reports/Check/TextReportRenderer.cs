@@ -106,13 +106,7 @@ public static class TextReportRenderer
 
     private static void WriteDiagnostic(Diagnostic diagnostic, TextWriter writer)
     {
-        var severity = diagnostic.Severity switch
-        {
-            Severity.Error => "error",
-            Severity.Warning => "warning",
-            _ => "note",
-        };
-        Line(writer, $"    {Place(diagnostic.Span)}{severity} {diagnostic.Code}: {diagnostic.Message}");
+        Line(writer, $"    {Place(diagnostic.Span)}{ReportSentences.SeverityName(diagnostic.Severity)} {diagnostic.Code}: {diagnostic.Message}");
         foreach (var related in diagnostic.Related)
         {
             Line(writer, $"      {Place(related.Span)}{related.Message}");
@@ -123,7 +117,7 @@ public static class TextReportRenderer
     {
         var view = property.Counterexample!;
         var trace = view.Trace;
-        var failingTime = Model.Simulation.ExactNumberText.FormatForDisplay(view.Timing.TimeOfScan(trace.FailingScan));
+        var failingTime = Model.Simulation.ExactNumberText.FormatForDisplay(view.FailingMilliseconds);
         Line(writer, string.Empty);
         var place = property.Span.File.Length == 0 ? string.Empty : " at " + Place(property.Span).TrimEnd(' ', ':');
         Line(writer, $"  {ReportSentences.Origin(property.Origin)} {property.Name} violated{place}");

@@ -15,9 +15,8 @@ internal static class TraceSummary
     public static string Headline(PropertyReport property, CounterexampleView view)
     {
         var trace = view.Trace;
-        var failingTime = ExactNumberText.FormatForDisplay(view.Timing.TimeOfScan(trace.FailingScan));
-        var origin = property.Origin == Model.Scan.PropertyOrigin.Rule ? "Rule" : "Requirement";
-        return $"{origin} {property.Name} is violated: it fails at scan {ReportSentences.Count(trace.FailingScan)} "
+        var failingTime = ExactNumberText.FormatForDisplay(view.FailingMilliseconds);
+        return $"{ReportSentences.OriginAtStart(property.Origin)} {property.Name} is violated: it fails at scan {ReportSentences.Count(trace.FailingScan)} "
             + $"({failingTime} ms after power-up), found by {view.Engine}.";
     }
 
@@ -28,7 +27,7 @@ internal static class TraceSummary
         if (view.PowerUp.Count > 0)
         {
             text.Append(" Power-up: ")
-                .Append(string.Join(", ", view.PowerUp.Select(note => note.Latch + "=" + (note.BreakingValue ? "TRUE" : "FALSE"))))
+                .Append(string.Join(", ", view.PowerUp.Select(ReportSentences.PowerUpSetting)))
                 .Append('.');
         }
 

@@ -25,5 +25,5 @@ public static class TraceValueText
     };
 
     /// <summary>Bools as TRUE and FALSE, as the equations write them; other values as <see cref="Display"/>.</summary>
-    public static string Logical(TraceValue? value) => value is BoolTraceValue b ? (b.Value ? "TRUE" : "FALSE") : Display(value);
+    public static string Logical(TraceValue? value) => value is BoolTraceValue b ? ReportSentences.Logical(b.Value) : Display(value);
 }

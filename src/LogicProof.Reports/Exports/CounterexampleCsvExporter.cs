@@ -56,15 +56,14 @@ public static class CounterexampleCsvExporter
 
     private static List<string> Comments(CounterexampleView view, List<InputTraceRow> rows)
     {
-        var failingScan = view.Trace.FailingScan;
         var comments = new List<string>
         {
             $"LogicProof counterexample: {view.PropertyName} of scheme {view.SchemeName}, found by {view.Engine}.",
-            $"It fails at scan {ReportSentences.Count(failingScan)} ({Ms(view.Timing.TimeOfScan(failingScan))} ms after power-up); the END row stops the run when that scan ends.",
+            $"It fails at scan {ReportSentences.Count(view.Trace.FailingScan)} ({Ms(view.FailingMilliseconds)} ms after power-up); the END row stops the run when that scan ends.",
         };
         if (view.PowerUp.Count > 0)
         {
-            comments.Add("Replay with --powerup " + string.Join(",", view.PowerUp.Select(note => note.Latch + "=" + (note.BreakingValue ? "TRUE" : "FALSE")))
+            comments.Add("Replay with --powerup " + string.Join(",", view.PowerUp.Select(ReportSentences.PowerUpSetting))
                 + " (latches without a declared power-up value).");
         }
 

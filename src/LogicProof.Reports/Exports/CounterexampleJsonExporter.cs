@@ -39,7 +39,7 @@ public static class CounterexampleJsonExporter
         JsonOutput.String(json, "engine", view.Engine);
         JsonOutput.Exact(json, "scanMs", view.Timing.ScanMilliseconds);
         json.WriteNumber("failingScan", trace.FailingScan);
-        JsonOutput.Exact(json, "failingTimeMs", view.Timing.TimeOfScan(trace.FailingScan));
+        JsonOutput.Exact(json, "failingTimeMs", view.FailingMilliseconds);
         JsonOutput.Exact(json, "endMs", view.EndMilliseconds);
         json.WriteNumber("totalScans", trace.TotalScans);
         json.WriteStartArray("powerUp");

@@ -27,7 +27,7 @@ public static class CounterexampleTextExporter
         var grid = new TraceGrid(view);
         foreach (var note in view.PowerUp)
         {
-            Line(writer, indent, $"power-up: latch {note.Latch} starts {(note.BreakingValue ? "TRUE" : "FALSE")} (no declared power-up value; the checker tried both)");
+            Line(writer, indent, "power-up: " + ReportSentences.PowerUpStart(note));
         }
 
         WriteTable(grid, writer, indent);
@@ -81,12 +81,10 @@ public static class CounterexampleTextExporter
 
     private static void WriteJustification(JustificationNode node, TextWriter writer, string indent)
     {
-        var place = node.Equation.IsNone ? string.Empty : $", {node.Equation.File}:{ReportSentences.Count(node.Equation.Line)}";
-        var note = node.Note is { } text ? $" ({text})" : string.Empty;
-        Line(writer, indent, $"{node.Cell} = {TraceValueText.Logical(node.Value)} at scan {ReportSentences.Count(node.Scan)}{place}{note}");
+        Line(writer, indent, ReportSentences.Justification(node));
         if (node.Terms.Count > 0)
         {
-            Line(writer, indent, "  because " + string.Join("; ", node.Terms.Select(term => $"{term.Text} = {TraceValueText.Logical(term.Value)}")));
+            Line(writer, indent, "  " + ReportSentences.Because(node));
         }
 
         foreach (var cause in node.Causes)

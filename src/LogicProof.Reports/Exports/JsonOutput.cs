@@ -5,6 +5,7 @@ using System.Text.Json;
 using Fractions;
 using LogicProof.Core.Text;
 using LogicProof.Model.Simulation;
+using LogicProof.Reports.Check;
 
 namespace LogicProof.Reports.Exports;
 
@@ -35,33 +36,16 @@ internal static class JsonOutput
     public static void Exact(Utf8JsonWriter json, string name, Fraction value) =>
         json.WriteString(name, ExactNumberText.FormatExact(value));
 
+    /// <summary>A duration as exact milliseconds.</summary>
+    public static void Milliseconds(Utf8JsonWriter json, string name, TimeSpan duration) =>
+        Exact(json, name, new Fraction(duration.Ticks, TimeSpan.TicksPerMillisecond));
+
     /// <summary>Writes a string property; a lone surrogate, which JSON text cannot carry, becomes U+FFFD.</summary>
     public static void String(Utf8JsonWriter json, string name, string value) => json.WriteString(name, Clean(value));
 
     public static void StringValue(Utf8JsonWriter json, string value) => json.WriteStringValue(Clean(value));
 
-    public static string Clean(string text)
-    {
-        StringBuilder? cleaned = null;
-        for (var i = 0; i < text.Length; i++)
-        {
-            var c = text[i];
-            var valid = !char.IsSurrogate(c)
-                || (char.IsHighSurrogate(c) && i + 1 < text.Length && char.IsLowSurrogate(text[i + 1]))
-                || (char.IsLowSurrogate(c) && i > 0 && char.IsHighSurrogate(text[i - 1]));
-            if (!valid)
-            {
-                cleaned ??= new StringBuilder(text, 0, i, text.Length);
-                cleaned.Append('\uFFFD');
-            }
-            else
-            {
-                cleaned?.Append(c);
-            }
-        }
-
-        return cleaned?.ToString() ?? text;
-    }
+    public static string Clean(string text) => CharacterReplacement.Replace(text, static _ => true, '\uFFFD');
 
     public static void Place(Utf8JsonWriter json, SourceSpan span)
     {

@@ -78,14 +78,13 @@ public static class VcdExporter
 
     private static void WriteHeader(CounterexampleView view, TraceGrid grid, List<int> shown, VcdTimescale timescale, TextWriter writer)
     {
-        var failingScan = view.Trace.FailingScan;
         Line(writer, "$comment");
         Line(writer, $"  LogicProof counterexample: {OneLine(view.PropertyName)} of scheme {OneLine(view.SchemeName)}, found by {OneLine(view.Engine)}.");
-        Line(writer, $"  It fails at scan {ReportSentences.Count(failingScan)}, {ExactNumberText.FormatExact(view.Timing.TimeOfScan(failingScan))} ms after power-up; "
+        Line(writer, $"  It fails at scan {ReportSentences.Count(view.Trace.FailingScan)}, {ExactNumberText.FormatExact(view.FailingMilliseconds)} ms after power-up; "
             + $"the dump ends when that scan ends. Scan interval {ExactNumberText.FormatExact(view.Timing.ScanMilliseconds)} ms.");
         foreach (var note in view.PowerUp)
         {
-            Line(writer, $"  Power-up: latch {OneLine(note.Latch)} starts {(note.BreakingValue ? "TRUE" : "FALSE")}.");
+            Line(writer, $"  Power-up: latch {OneLine(note.Latch)} starts {ReportSentences.Logical(note.BreakingValue)}.");
         }
 
         if (timescale.Rounded)

@@ -70,8 +70,7 @@ public static class HtmlReportRenderer
             html.Append("<ul>\n");
             foreach (var diagnostic in file.Diagnostics)
             {
-                var severity = JsonReportRenderer.SeverityName(diagnostic.Severity);
-                html.Append($"<li class=\"{severity}\">{E($"{diagnostic.Span}: {severity} {diagnostic.Code}: {diagnostic.Message}")}");
+                html.Append($"<li class=\"{ReportSentences.SeverityName(diagnostic.Severity)}\">{E(ReportSentences.DiagnosticLine(diagnostic))}");
                 foreach (var related in diagnostic.Related)
                 {
                     html.Append($"<br />{E($"{related.Span}: {related.Message}")}");
@@ -143,7 +142,7 @@ public static class HtmlReportRenderer
 
         foreach (var note in view.PowerUp)
         {
-            html.Append($"<p>Power-up: latch {E(note.Latch)} starts {(note.BreakingValue ? "TRUE" : "FALSE")} (no declared power-up value; the checker tried both).</p>\n");
+            html.Append($"<p>Power-up: {E(ReportSentences.PowerUpStart(note))}.</p>\n");
         }
 
         html.Append("<figure>\n");

@@ -50,14 +50,10 @@ internal static class HtmlTrace
 
     private static void WriteNode(StringBuilder html, JustificationNode node)
     {
-        var place = node.Equation.IsNone ? string.Empty : $", {node.Equation.File}:{ReportSentences.Count(node.Equation.Line)}";
-        var note = node.Note is { } text ? $" ({text})" : string.Empty;
-        html.Append("<li>")
-            .Append(HtmlText.Escape($"{node.Cell} = {TraceValueText.Logical(node.Value)} at scan {ReportSentences.Count(node.Scan)}{place}{note}"));
+        html.Append("<li>").Append(HtmlText.Escape(ReportSentences.Justification(node)));
         if (node.Terms.Count > 0)
         {
-            html.Append("<br />").Append(HtmlText.Escape(
-                "because " + string.Join("; ", node.Terms.Select(term => $"{term.Text} = {TraceValueText.Logical(term.Value)}"))));
+            html.Append("<br />").Append(HtmlText.Escape(ReportSentences.Because(node)));
         }
 
         if (node.Causes.Count > 0)

@@ -24,7 +24,8 @@ public static class SimulationTextRenderer
         var scanWidth = Math.Max("scan".Length, Count(Math.Max(run.ScanCount - 1, 0)).Length);
         var timeWidth = Math.Max("time_ms".Length, ExactNumberText.FormatForDisplay(lastTime).Length);
         var widths = run.Columns.Select(column => Math.Max(column.Name.Length, column.Type == SignalType.Bool ? 2 : 8)).ToArray();
-        var bar = run.Columns.Count(column => column.Kind == SimulationColumnKind.Input);
+        var inputCount = run.Columns.Count(column => column.Kind == SimulationColumnKind.Input);
+        var barBeforeColumn = inputCount > 0 && inputCount < run.Columns.Count ? inputCount : -1;
 
         writer.Write(Title(run));
         writer.Write('\n');
@@ -32,7 +33,7 @@ public static class SimulationTextRenderer
         header.Append("scan".PadRight(scanWidth)).Append(ColumnGap).Append("time_ms".PadRight(timeWidth));
         for (var i = 0; i < run.Columns.Count; i++)
         {
-            AppendCell(header, run.Columns[i].Name, widths[i], i == bar && bar > 0 && bar < run.Columns.Count);
+            AppendCell(header, run.Columns[i].Name, widths[i], i == barBeforeColumn);
         }
 
         writer.Write(header.ToString().TrimEnd());
@@ -45,7 +46,7 @@ public static class SimulationTextRenderer
             for (var i = 0; i < run.Columns.Count; i++)
             {
                 var text = SimulationValueText.Display(row.Values[i]) + (row.Changed[i] ? ChangeMark : string.Empty);
-                AppendCell(line, text, widths[i], i == bar && bar > 0 && bar < run.Columns.Count);
+                AppendCell(line, text, widths[i], i == barBeforeColumn);
             }
 
             writer.Write(line.ToString().TrimEnd());
@@ -63,9 +64,9 @@ public static class SimulationTextRenderer
         return $"{run.SchemeName}: {Count(run.ScanCount)} scans of {scan} ms{exactScan}{rows}; * marks a change since the previous scan, ~ a rounded value";
     }
 
-    private static void AppendCell(StringBuilder line, string text, int width, bool startsOutputs)
+    private static void AppendCell(StringBuilder line, string text, int width, bool barBefore)
     {
-        line.Append(startsOutputs ? ColumnGap + "|" + ColumnGap : ColumnGap);
+        line.Append(barBefore ? ColumnGap + "|" + ColumnGap : ColumnGap);
         line.Append(text.PadRight(width));
     }
 

@@ -87,27 +87,21 @@ public class BinderDiagnosticTests
         DiagnosticAssert.ErrorAtMarker(code, markedText);
     }
 
-    [Fact]
-    public void Load_WhenNameIsDeclaredTwice_PointsBackAtTheFirstDeclaration()
+    [Theory]
+    [InlineData(LanguageCodes.DuplicateName, "inputs\n  Lo86 : bool;\nend\nlocals\n  LO86 : bool;\nend\n", 8, 3, 5, 3)]
+    [InlineData(LanguageCodes.AssignedTwice, "locals\n  X : bool;\nend\nlogic\n  X := TRUE;\n  X := FALSE;\nend\n", 9, 3, 8, 3)]
+    [InlineData(LanguageCodes.TargetNotAssignable, "inputs\n  A : bool;\nend\nlogic\n  A := TRUE;\nend\n", 8, 3, 5, 3)]
+    [InlineData(LanguageCodes.DuplicatePropertyName, "require R1: TRUE;\nrequire r1: FALSE;\n", 5, 9, 4, 9)]
+    [InlineData(LanguageCodes.DuplicatePropertyName, "assume A1: TRUE;\nassume A1: FALSE;\n", 5, 1, 4, 1)]
+    public void Load_WhenAnErrorInvolvesAnEarlierPlace_PointsBackAtIt(string code, string body, int line, int column, int relatedLine, int relatedColumn)
     {
-        var result = Scheme.LoadBody("inputs\n  Lo86 : bool;\nend\nlocals\n  LO86 : bool;\nend\n");
+        var result = Scheme.LoadBody(body);
 
         var error = Assert.Single(result.Diagnostics);
-        Assert.Equal(LanguageCodes.DuplicateName, error.Code);
-        Assert.Equal(8, error.Span.Line);
+        Assert.Equal(code, error.Code);
+        Assert.Equal((line, column), (error.Span.Line, error.Span.Column));
         var related = Assert.Single(error.Related);
-        Assert.Equal((5, 3), (related.Span.Line, related.Span.Column));
-    }
-
-    [Fact]
-    public void Load_WhenNameIsAssignedTwice_ReportsBothEquations()
-    {
-        var result = Scheme.LoadBody("locals\n  X : bool;\nend\nlogic\n  X := TRUE;\n  X := FALSE;\nend\n");
-
-        var error = Assert.Single(result.Diagnostics);
-        Assert.Equal(LanguageCodes.AssignedTwice, error.Code);
-        Assert.Equal(9, error.Span.Line);
-        Assert.Equal(8, Assert.Single(error.Related).Span.Line);
+        Assert.Equal((relatedLine, relatedColumn), (related.Span.Line, related.Span.Column));
     }
 
     [Fact]

@@ -16,10 +16,11 @@ public class RobustnessTests(ITestOutputHelper output)
     private const string Declarations = Scheme.Header + "inputs\n  A : bool;\n  B : bool;\n  C : bool;\nend\noutputs\n  X : bool;\nend\n";
 
     /// <summary>
-    /// Processor time of this process, not wall time, so that other work on a shared two-core machine does not
-    /// count; generous for a Debug build. The figures themselves are written to the test output.
+    /// A hang guard, not a speed target (the speed targets are in bench/): processor time of this process, not wall
+    /// time, so that other work on a shared machine does not count, and far above what a Debug build needs. The
+    /// figures themselves are written to the test output.
     /// </summary>
-    private static readonly TimeSpan TimeLimit = TimeSpan.FromSeconds(5);
+    private static readonly TimeSpan HangGuard = TimeSpan.FromSeconds(60);
 
     [Fact]
     public void Load_WhenTenThousandParenthesesNest_ReportsTheDepthWithoutParsing()
@@ -55,7 +56,7 @@ public class RobustnessTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void Load_WhenOneEquationIsAMegabyteLong_ParsesAndBindsQuickly()
+    public void Load_WhenOneEquationIsAMegabyteLong_ParsesAndBindsWithoutHanging()
     {
         var terms = new[] { "A", "NOT B", "(A OR C)", "B XOR C", "NOT (C AND A)" };
         var operators = new[] { " AND ", " OR ", " AND ", " XOR " };
@@ -70,11 +71,11 @@ public class RobustnessTests(ITestOutputHelper output)
 
         var top = Assert.IsType<BoundBinary>(Assert.Single(result.Scheme!.Equations).Expression);
         Assert.Equal(BinaryOperator.Or, top.Operator);
-        Assert.True(elapsed < TimeLimit, $"took {elapsed.TotalMilliseconds} ms of processor time");
+        Assert.True(elapsed < HangGuard, $"took {elapsed.TotalMilliseconds} ms of processor time");
     }
 
     [Fact]
-    public void Load_WhenAMegabyteEquationEndsInASyntaxError_ReportsItQuickly()
+    public void Load_WhenAMegabyteEquationEndsInASyntaxError_ReportsItWithoutHanging()
     {
         var text = Declarations + "logic\n  X := " + string.Join(" AND ", Enumerable.Repeat("A", 200_000)) + " AND ;\nend\n";
 
@@ -83,7 +84,7 @@ public class RobustnessTests(ITestOutputHelper output)
         var error = Assert.Single(result.Diagnostics);
         Assert.Equal(LanguageCodes.SyntaxError, error.Code);
         Assert.Equal(13, error.Span.Line);
-        Assert.True(elapsed < TimeLimit, $"took {elapsed.TotalMilliseconds} ms of processor time");
+        Assert.True(elapsed < HangGuard, $"took {elapsed.TotalMilliseconds} ms of processor time");
     }
 
     [Fact]
@@ -108,7 +109,7 @@ public class RobustnessTests(ITestOutputHelper output)
 
         Assert.Equal(count, result.Scheme!.Equations.Count);
         Assert.Equal(count - 1, result.Scheme.Equations[^1].Index);
-        Assert.True(elapsed < TimeLimit * 2, $"took {elapsed.TotalMilliseconds} ms of processor time");
+        Assert.True(elapsed < HangGuard, $"took {elapsed.TotalMilliseconds} ms of processor time");
     }
 
     private (T Result, TimeSpan ProcessorTime) Timed<T>(Func<T> action, string what)

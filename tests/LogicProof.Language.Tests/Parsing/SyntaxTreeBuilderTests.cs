@@ -92,6 +92,19 @@ public class SyntaxTreeBuilderTests
     }
 
     [Fact]
+    public void Build_WhenBreakerModelIsGivenTwice_KeepsTheFirstAndPointsBackAtIt()
+    {
+        var result = Scheme.LoadBody("breaker_model\n  a = TRUE;\nend\nbreaker_model\n  b = FALSE;\nend\n");
+
+        var error = Assert.Single(result.Diagnostics);
+        Assert.Equal(LanguageCodes.DuplicateBreakerModel, error.Code);
+        Assert.Equal((7, 1), (error.Span.Line, error.Span.Column));
+        var related = Assert.Single(error.Related);
+        Assert.Equal((4, 1), (related.Span.Line, related.Span.Column));
+        Assert.Equal("a", Assert.Single(result.Syntax!.BreakerModel!.Settings).Key);
+    }
+
+    [Fact]
     public void Build_WhenCallHasArguments_KeepsNamesAndOrder()
     {
         var syntax = Scheme.Load(Scheme.Header + "logic\n  X := SR(R := B, S1 := A) OR TON(A, T#1s);\nend\n").Syntax!;

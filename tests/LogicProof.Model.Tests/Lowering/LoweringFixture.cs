@@ -44,76 +44,8 @@ internal static class LoweringFixture
     public static List<CellReadExpression> ReadsOf(ScanStep step)
     {
         var reads = new List<CellReadExpression>();
-        var roots = step switch
-        {
-            AssignStep a => new[] { a.Value },
-            TimerStep t => new[] { t.Input },
-            EdgeStep e => new[] { e.Clock },
-            LatchStep l => new[] { l.Set, l.Reset },
-            _ => throw new InvalidOperationException(),
-        };
-        foreach (var root in roots)
-        {
-            Collect(root, reads);
-        }
-
+        new CellReadCollector().Collect(step, reads);
         return reads;
-    }
-
-    private static void Collect(ScanExpression expression, List<CellReadExpression> reads)
-    {
-        switch (expression)
-        {
-            case CellReadExpression read:
-                reads.Add(read);
-                break;
-            case NotExpression e:
-                Collect(e.Operand, reads);
-                break;
-            case AndExpression e:
-                e.Operands.ToList().ForEach(o => Collect(o, reads));
-                break;
-            case OrExpression e:
-                e.Operands.ToList().ForEach(o => Collect(o, reads));
-                break;
-            case XorExpression e:
-                Collect(e.Left, reads);
-                Collect(e.Right, reads);
-                break;
-            case ImpliesExpression e:
-                Collect(e.Left, reads);
-                Collect(e.Right, reads);
-                break;
-            case CompareExpression e:
-                Collect(e.Left, reads);
-                Collect(e.Right, reads);
-                break;
-            case AddExpression e:
-                Collect(e.Left, reads);
-                Collect(e.Right, reads);
-                break;
-            case SubtractExpression e:
-                Collect(e.Left, reads);
-                Collect(e.Right, reads);
-                break;
-            case ScaleExpression e:
-                Collect(e.Operand, reads);
-                break;
-            case NegateExpression e:
-                Collect(e.Operand, reads);
-                break;
-            case AbsExpression e:
-                Collect(e.Operand, reads);
-                break;
-            case MinExpression e:
-                Collect(e.Left, reads);
-                Collect(e.Right, reads);
-                break;
-            case MaxExpression e:
-                Collect(e.Left, reads);
-                Collect(e.Right, reads);
-                break;
-        }
     }
 
     public static string Describe(IEnumerable<Diagnostic> diagnostics) =>

@@ -2,6 +2,7 @@ using System.Runtime.CompilerServices;
 using LogicProof.Core.Diagnostics;
 using LogicProof.Language;
 using LogicProof.Model.Lowering;
+using LogicProof.Model.Scan;
 using static LogicProof.Model.Tests.Lowering.LoweringFixture;
 
 namespace LogicProof.Model.Tests.Lowering;
@@ -71,7 +72,7 @@ public sealed class ModelBuilderDiagnosticTests
 
         // Every preset is a multiple of 25 ms, a whole number of quarter cycles at 60 Hz.
         Assert.Empty(model.Roundings);
-        Assert.Equal(120, Assert.IsType<Scan.TimerStep>(model.WriterOf("CLOSE_FAIL")).PresetScans);
+        Assert.Equal(120, Assert.IsType<TimerStep>(model.WriterOf("CLOSE_FAIL")).PresetScans);
     }
 
     /// <summary>The folder holding LogicProof.sln, found above the test assembly or, with an outside artifacts path, above this source file.</summary>

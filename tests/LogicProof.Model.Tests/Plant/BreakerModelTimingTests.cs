@@ -1,4 +1,5 @@
 using LogicProof.Model.Tests.Rules;
+using LogicProof.Model.Tests.Simulation;
 
 namespace LogicProof.Model.Tests.Plant;
 
@@ -40,7 +41,7 @@ public sealed class BreakerModelTimingTests
             ["BKM_OPENING_DONE"] = Pulse(11 + openingScans, 16),
         };
 
-        var waves = RuleHarness.Run(model, inputs, ["B52A", "B52B", .. Assumptions]);
+        var waves = SimulationHarness.Run(model, inputs, ["B52A", "B52B", .. Assumptions]);
 
         Assert.Equal(closed, waves["B52A"]);
         Assert.Equal(open, waves["B52B"]);
@@ -52,7 +53,7 @@ public sealed class BreakerModelTimingTests
     {
         var model = RuleHarness.Model(Scheme("FALSE"));
 
-        var waves = RuleHarness.Run(model, new Dictionary<string, string> { ["CMD"] = "01000000", ["BKM_CLOSING_DONE"] = Pulse(4, 8) }, "B52A", "BKM_CLOSING_TIME_MIN");
+        var waves = SimulationHarness.Run(model, new Dictionary<string, string> { ["CMD"] = "01000000", ["BKM_CLOSING_DONE"] = Pulse(4, 8) }, "B52A", "BKM_CLOSING_TIME_MIN");
 
         Assert.Equal("00001111", waves["B52A"]);
         Assert.Equal("11110111", waves["BKM_CLOSING_TIME_MIN"]);
@@ -63,7 +64,7 @@ public sealed class BreakerModelTimingTests
     {
         var model = RuleHarness.Model(Scheme("FALSE"));
 
-        var waves = RuleHarness.Run(model, new Dictionary<string, string> { ["CMD"] = "0100000000" }, "B52A", "B52B", "BKM_CLOSING_TIME_MAX");
+        var waves = SimulationHarness.Run(model, new Dictionary<string, string> { ["CMD"] = "0100000000" }, "B52A", "B52B", "BKM_CLOSING_TIME_MAX");
 
         // Travel from scan 2: five scans (2..6) are allowed, the sixth (scan 7) is not.
         Assert.Equal("0000000000", waves["B52A"]);
@@ -87,7 +88,7 @@ public sealed class BreakerModelTimingTests
             ["BKM_OPENING_DONE"] = Pulse(6, 10),
         };
 
-        var waves = RuleHarness.Run(model, inputs, ["B52A", "B52B", .. Assumptions]);
+        var waves = SimulationHarness.Run(model, inputs, ["B52A", "B52B", .. Assumptions]);
 
         Assert.Equal(closed, waves["B52A"]);
         Assert.Equal(open, waves["B52B"]);
@@ -99,7 +100,7 @@ public sealed class BreakerModelTimingTests
     {
         var model = RuleHarness.Model(Scheme("FALSE"));
 
-        var waves = RuleHarness.Run(model, new Dictionary<string, string> { ["BKM_POWER_UP_CLOSED"] = "1000" }, "B52A", "B52B");
+        var waves = SimulationHarness.Run(model, new Dictionary<string, string> { ["BKM_POWER_UP_CLOSED"] = "1000" }, "B52A", "B52B");
 
         Assert.Equal("1111", waves["B52A"]);
         Assert.Equal("0000", waves["B52B"]);
@@ -121,7 +122,7 @@ public sealed class BreakerModelTimingTests
             ["BKM_OPENING_DONE"] = "0000000000",
         };
 
-        var waves = RuleHarness.Run(model, inputs, "BKM_CLOSE_INTO_FAULT");
+        var waves = SimulationHarness.Run(model, inputs, "BKM_CLOSE_INTO_FAULT");
 
         Assert.Equal(assumption, waves["BKM_CLOSE_INTO_FAULT"]);
     }

@@ -1,4 +1,5 @@
 using LogicProof.Model.Rules;
+using LogicProof.Model.Tests.Simulation;
 
 namespace LogicProof.Model.Tests.Rules;
 
@@ -42,7 +43,7 @@ public sealed class RuleFormulaTraceTests
     {
         var model = RuleHarness.Model(PumpingScheme, new RuleSelection(["no-pumping"], []));
 
-        var waves = RuleHarness.Run(model, new Dictionary<string, string> { ["CMD"] = command, ["CO_IN"] = closeOutput }, "no-pumping", "SUGGESTED");
+        var waves = SimulationHarness.Run(model, new Dictionary<string, string> { ["CMD"] = command, ["CO_IN"] = closeOutput }, "no-pumping", "SUGGESTED");
 
         Assert.Equal(rule, waves["no-pumping"]);
         Assert.Equal(suggested, waves["SUGGESTED"]);
@@ -63,7 +64,7 @@ public sealed class RuleFormulaTraceTests
     {
         var model = RuleHarness.Model(SealScheme, new RuleSelection(["close-sealed-in", "close-not-held-on"], []));
 
-        var waves = RuleHarness.Run(
+        var waves = SimulationHarness.Run(
             model,
             new Dictionary<string, string> { ["CO_IN"] = closeOutput, ["B52A"] = breakerClosed, ["TRIP_IN"] = trip },
             "close-sealed-in",

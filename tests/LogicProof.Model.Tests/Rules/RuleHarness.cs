@@ -4,7 +4,6 @@ using LogicProof.Language.Binding;
 using LogicProof.Model.Lowering;
 using LogicProof.Model.Rules;
 using LogicProof.Model.Scan;
-using LogicProof.Model.Simulation;
 
 namespace LogicProof.Model.Tests.Rules;
 
@@ -39,38 +38,6 @@ internal static class RuleHarness
         var built = ModelBuilder.Build(setup.ModelScheme, setup.ExtraProperties);
         return built.Model ?? throw new InvalidOperationException(Describe(built.Diagnostics));
     }
-
-    /// <summary>
-    /// Runs the model with one waveform per input ("0110": one character per scan; inputs not given stay FALSE) and
-    /// returns the waveform of each named cell. Latches of unknown power-up start FALSE.
-    /// </summary>
-    public static Dictionary<string, string> Run(ScanModel model, IReadOnlyDictionary<string, string> inputs, params string[] cells)
-    {
-        var simulator = ScanSimulator.Compile(model);
-        var state = simulator.PowerUpStateDefaultingUnknownToFalse(null).State;
-        var scans = inputs.Values.Max(w => w.Length);
-        var values = simulator.CreateValues();
-        var scanInputs = simulator.CreateInputs();
-        var result = cells.ToDictionary(c => c, _ => new System.Text.StringBuilder(), StringComparer.OrdinalIgnoreCase);
-        for (var scan = 0; scan < scans; scan++)
-        {
-            foreach (var (name, wave) in inputs)
-            {
-                scanInputs.SetBool(Cell(model, name), scan < wave.Length && wave[scan] == '1');
-            }
-
-            simulator.Step(state, scanInputs, values);
-            foreach (var cell in cells)
-            {
-                result[cell].Append(values.GetBool(Cell(model, cell)) ? '1' : '0');
-            }
-        }
-
-        return result.ToDictionary(r => r.Key, r => r.Value.ToString(), StringComparer.OrdinalIgnoreCase);
-    }
-
-    public static int Cell(ScanModel model, string name) =>
-        model.Cells.Single(c => string.Equals(c.Name, name, StringComparison.OrdinalIgnoreCase)).Index;
 
     public static string Describe(IEnumerable<Diagnostic> diagnostics) =>
         string.Join(Environment.NewLine, diagnostics.Select(d => DiagnosticFormatter.Format(d, null)));

@@ -52,8 +52,8 @@ public sealed class KInductionEngineTests
     public async Task Check_WhenPropertyNeedsARelationBetweenTimers_ProvesOnlyWithThatLemma()
     {
         var model = SchemeLoader.Load(Schemes.TwoTimers);
-        var slow = CounterOf(model, "SLOW");
-        var fast = CounterOf(model, "FAST");
+        var slow = SchemeLoader.CounterSlotOf(model, "SLOW");
+        var fast = SchemeLoader.CounterSlotOf(model, "FAST");
 
         // Invariant: both timers count the same standing input, so FAST's counter is min(SLOW's counter, 2500).
         var relation = new Lemma(
@@ -80,7 +80,4 @@ public sealed class KInductionEngineTests
         Assert.IsType<Inconclusive>(without);
         Assert.IsType<Proved>(with);
     }
-
-    private static int CounterOf(ScanModel model, string cell) =>
-        model.StateSlots.Single(s => s.Kind == StateSlotKind.TimerCounter && s.Cell == SchemeLoader.Cell(model, cell)).Index;
 }

@@ -3,6 +3,7 @@ using LogicProof.Proof.Engines;
 using LogicProof.Proof.Invariants;
 using LogicProof.Proof.Results;
 using LogicProof.Proof.Tests.Oracle;
+using LogicProof.Proof.Tests.Support;
 using Xunit.Abstractions;
 
 namespace LogicProof.Proof.Tests.Engines;
@@ -23,7 +24,7 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     [Fact]
     public async Task Check_WhenThePropertyNeedsAnInvariant_ProvesAndWritesItOverSlotNames()
     {
-        var verdict = await Run(PdrSchemes.SealIn(declareInit: true), "SEAL_NEEDS_COMMAND_FIRST");
+        var verdict = await Run(Schemes.SealIn(declareInit: true), "SEAL_NEEDS_COMMAND_FIRST");
 
         var proved = Assert.IsType<Proved>(verdict);
         output.WriteLine(proved.Invariant);
@@ -39,23 +40,23 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     }
 
     [Theory]
-    [InlineData(true, 0)]
-    [InlineData(false, 0)]
-    public async Task Check_WhenTheSealInHasNoDeclaredPowerUp_FindsTheViolationAtTheFirstScan(bool accelerate, long expectedScan)
+    [InlineData(true)]
+    [InlineData(false)]
+    public async Task Check_WhenTheSealInHasNoDeclaredPowerUp_FindsTheViolationAtTheFirstScan(bool accelerate)
     {
-        var verdict = await Run(PdrSchemes.SealIn(declareInit: false), "SEAL_NEEDS_COMMAND_FIRST", Options with { Accelerate = accelerate });
+        var verdict = await Run(Schemes.SealIn(declareInit: false), "SEAL_NEEDS_COMMAND_FIRST", Options with { Accelerate = accelerate });
 
         // An undeclared seal-in may power up TRUE (it has no de-energised state), breaking the rule at once.
         var trace = Assert.IsType<Violated>(verdict).Trace;
-        Assert.Equal(expectedScan, trace.FailingScan);
+        Assert.Equal(0, trace.FailingScan);
         Assert.Contains(trace.PowerUp, p => p.Name == "SEAL@last" && p.Value == TraceValue.Of(true));
     }
 
     [Fact]
     public async Task Check_WhenATimerBreaksThePropertyAfterTenScans_ReturnsTheShortestTrace()
     {
-        var model = LplModels.Load(PdrSchemes.ShortDelay(assumeNoCommand: false));
-        var property = LplModels.Property(model, "NEVER_CLOSES");
+        var model = SchemeLoader.Load(Schemes.ShortDelay);
+        var property = SchemeLoader.Property(model, "NEVER_CLOSES");
 
         var verdict = await new PdrEngine().CheckAsync(new ProofProblem(model, property), Options, CancellationToken.None);
 
@@ -69,7 +70,7 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     [Fact]
     public async Task Check_WhenAnAssumptionRulesOutTheCommand_Proves()
     {
-        var verdict = await Run(PdrSchemes.ShortDelay(assumeNoCommand: true), "NEVER_CLOSES");
+        var verdict = await Run(Schemes.ShortDelayAssumingNoCommand, "NEVER_CLOSES");
 
         Assert.IsType<Proved>(verdict);
     }
@@ -77,8 +78,8 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     [Fact]
     public async Task Check_WhenTheDeepTimerIsViolatedAfter5000Scans_FindsItWithAcceleration()
     {
-        var model = LplModels.Load(PdrSchemes.DeepTimer);
-        var property = LplModels.Property(model, "NO_GAS_LOCK");
+        var model = SchemeLoader.Load(Schemes.DeepTimer);
+        var property = SchemeLoader.Property(model, "NO_GAS_LOCK");
         var clock = Stopwatch.StartNew();
 
         var verdict = await new PdrEngine().CheckAsync(new ProofProblem(model, property), Options, CancellationToken.None);
@@ -96,7 +97,7 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     {
         var clock = Stopwatch.StartNew();
 
-        var verdict = await Run(PdrSchemes.DeepTimer, "LOCK_NEEDS_GAS", Options with { Accelerate = accelerate });
+        var verdict = await Run(Schemes.DeepTimer, "LOCK_NEEDS_GAS", Options with { Accelerate = accelerate });
 
         output.WriteLine($"deep timer proof in {clock.Elapsed.TotalSeconds:0.000} s (acceleration {accelerate})");
         Assert.IsType<Proved>(verdict);
@@ -107,7 +108,7 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     {
         var clock = Stopwatch.StartNew();
 
-        var verdict = await Run(PdrSchemes.TwoTimers, "SLOW_AFTER_FAST");
+        var verdict = await Run(Schemes.TwoTimers, "SLOW_AFTER_FAST");
 
         output.WriteLine($"two timers without lemmas in {clock.Elapsed.TotalSeconds:0.000} s: {(verdict as Proved)?.Invariant}");
         Assert.IsType<Proved>(verdict);
@@ -116,8 +117,8 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     [Fact]
     public async Task Check_WhenGeneratedLemmasAreGiven_StillProves()
     {
-        var model = LplModels.Load(PdrSchemes.TwoTimers);
-        var property = LplModels.Property(model, "SLOW_AFTER_FAST");
+        var model = SchemeLoader.Load(Schemes.TwoTimers);
+        var property = SchemeLoader.Property(model, "SLOW_AFTER_FAST");
         var lemmas = new InvariantGenerator().Generate(model);
         var clock = Stopwatch.StartNew();
 
@@ -141,7 +142,7 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     public async Task Check_WhenBmcCannotReachTheViolationWithinItsDepth_ReturnsInconclusiveWithoutATrace()
     {
         // Without acceleration the violation needs 11 steps; BMC may take only 5, so no trace can be shown.
-        var verdict = await Run(PdrSchemes.ShortDelay(assumeNoCommand: false), "NEVER_CLOSES", Options with { Accelerate = false, MaxDepth = 5 });
+        var verdict = await Run(Schemes.ShortDelay, "NEVER_CLOSES", Options with { Accelerate = false, MaxDepth = 5 });
 
         var inconclusive = Assert.IsType<Inconclusive>(verdict);
         Assert.Contains("PDR found a violation", inconclusive.Reason);
@@ -150,12 +151,12 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     [Fact]
     public async Task Check_WhenAlreadyCancelled_ReturnsInconclusive()
     {
-        var model = LplModels.Load(PdrSchemes.TwoTimers);
+        var model = SchemeLoader.Load(Schemes.TwoTimers);
         using var cancelled = new CancellationTokenSource();
         await cancelled.CancelAsync();
 
         var verdict = await new PdrEngine().CheckAsync(
-            new ProofProblem(model, LplModels.Property(model, "SLOW_AFTER_FAST")), Options, cancelled.Token);
+            new ProofProblem(model, SchemeLoader.Property(model, "SLOW_AFTER_FAST")), Options, cancelled.Token);
 
         Assert.IsType<Inconclusive>(verdict);
     }
@@ -163,12 +164,12 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
     [Fact]
     public async Task Check_WhenCancelledWhileRunning_StopsPromptlyWithInconclusive()
     {
-        var model = LplModels.Load(PdrSchemes.Counter(24));
+        var model = SchemeLoader.Load(PdrSchemes.Counter(24));
         using var cancellation = new CancellationTokenSource(TimeSpan.FromMilliseconds(300));
         var clock = Stopwatch.StartNew();
 
         var verdict = await new PdrEngine().CheckAsync(
-            new ProofProblem(model, LplModels.Property(model, "NOT_FULL")), Options with { TimeLimit = null }, cancellation.Token);
+            new ProofProblem(model, SchemeLoader.Property(model, "NOT_FULL")), Options with { TimeLimit = null }, cancellation.Token);
 
         output.WriteLine($"stopped after {clock.Elapsed.TotalSeconds:0.000} s");
         Assert.True(clock.Elapsed < TimeSpan.FromSeconds(30), $"took {clock.Elapsed}");
@@ -186,9 +187,6 @@ public sealed class PdrEngineTests(ITestOutputHelper output)
         Assert.Equal("time limit reached", Assert.IsType<Inconclusive>(verdict).Reason);
     }
 
-    private static Task<PropertyVerdict> Run(string source, string property, EngineOptions? options = null)
-    {
-        var model = LplModels.Load(source);
-        return new PdrEngine().CheckAsync(new ProofProblem(model, LplModels.Property(model, property)), options ?? Options, CancellationToken.None);
-    }
+    private static Task<PropertyVerdict> Run(string source, string property, EngineOptions? options = null) =>
+        Verdicts.RunAsync(new PdrEngine(), SchemeLoader.Load(source), property, options ?? Options);
 }

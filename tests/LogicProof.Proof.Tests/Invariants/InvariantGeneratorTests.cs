@@ -4,6 +4,7 @@ using LogicProof.Proof.Engines;
 using LogicProof.Proof.Invariants;
 using LogicProof.Proof.Results;
 using LogicProof.Proof.Tests.Oracle;
+using LogicProof.Proof.Tests.Support;
 using Xunit.Abstractions;
 
 namespace LogicProof.Proof.Tests.Invariants;
@@ -13,7 +14,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
     [Fact]
     public void Generate_WhenTwoTimersShareAnInput_KeepsTheMinRelation()
     {
-        var model = LplModels.Load(InvariantSchemes.TwoTimers);
+        var model = SchemeLoader.Load(Schemes.TwoTimers);
 
         var lemmas = new InvariantGenerator().Generate(model);
 
@@ -23,8 +24,8 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
     [Fact]
     public async Task Generate_WhenAPropertyNeedsTheTimerRelation_LetsKInductionProveIt()
     {
-        var model = LplModels.Load(InvariantSchemes.TwoTimers);
-        var property = LplModels.Property(model, "SLOW_AFTER_FAST");
+        var model = SchemeLoader.Load(Schemes.TwoTimers);
+        var property = SchemeLoader.Property(model, "SLOW_AFTER_FAST");
         var options = new EngineOptions { MaxDepth = 4, TimeLimit = TimeSpan.FromSeconds(60) };
         var clock = Stopwatch.StartNew();
         var lemmas = new InvariantGenerator().Generate(model);
@@ -47,7 +48,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
     [InlineData(false)]
     public void Generate_WhenLatchPowerUpIsUnknown_DoesNotClaimMemoryEqualsLastValue(bool declareInit)
     {
-        var model = LplModels.Load(InvariantSchemes.Lockout(declareInit));
+        var model = SchemeLoader.Load(InvariantSchemes.Lockout(declareInit));
 
         var lemmas = new InvariantGenerator().Generate(model);
 
@@ -60,7 +61,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
     [Fact]
     public void Generate_WhenAnEdgeWatchesACellWithALastValue_RelatesTheMemoryToIt()
     {
-        var model = LplModels.Load(InvariantSchemes.Lockout(declareInit: true));
+        var model = SchemeLoader.Load(InvariantSchemes.Lockout(declareInit: true));
 
         var lemmas = new InvariantGenerator().Generate(model);
 
@@ -73,7 +74,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
     [InlineData(false)]
     public void Generate_WhenAnAssumptionRestrictsTheInputs_KeepsWhatHoldsUnderIt(bool assume)
     {
-        var model = LplModels.Load(InvariantSchemes.AssumedNoReset(assume));
+        var model = SchemeLoader.Load(InvariantSchemes.AssumedNoReset(assume));
 
         var lemmas = new InvariantGenerator().Generate(model);
 
@@ -90,7 +91,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
         var total = 0;
         foreach (var source in new[] { InvariantSchemes.Lockout(declareInit), InvariantSchemes.AssumedNoReset(declareInit) })
         {
-            var model = LplModels.Load(source);
+            var model = SchemeLoader.Load(source);
             var reachable = new ExplicitStateExplorer(model).Explore(100_000);
             Assert.True(reachable.Complete);
 
@@ -109,7 +110,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
     [Fact]
     public void Generate_WhenTheModelHas200Slots_FinishesWithinSeconds()
     {
-        var model = LplModels.Load(InvariantSchemes.ManyBays(40));
+        var model = SchemeLoader.Load(InvariantSchemes.ManyBays(40));
         var clock = Stopwatch.StartNew();
 
         var lemmas = new InvariantGenerator().Generate(model);
@@ -123,7 +124,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
     [Fact]
     public void Generate_WhenCancelled_ReturnsNoLemmas()
     {
-        var model = LplModels.Load(InvariantSchemes.TwoTimers);
+        var model = SchemeLoader.Load(Schemes.TwoTimers);
         using var cancelled = new CancellationTokenSource();
         cancelled.Cancel();
 
@@ -135,7 +136,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
     [Fact]
     public void Generate_WhenTheSolverHasNoTime_ReturnsNoLemmasRatherThanUncheckedOnes()
     {
-        var model = LplModels.Load(InvariantSchemes.ManyBays(10));
+        var model = SchemeLoader.Load(InvariantSchemes.ManyBays(10));
 
         var lemmas = new InvariantGenerator(new InvariantOptions { TimeLimit = TimeSpan.Zero }).Generate(model);
 
@@ -145,7 +146,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
     [Fact]
     public void Generate_WhenTheCandidateCapIsSmall_NeverReturnsMoreThanTheCap()
     {
-        var model = LplModels.Load(InvariantSchemes.ManyBays(10));
+        var model = SchemeLoader.Load(InvariantSchemes.ManyBays(10));
 
         var lemmas = new InvariantGenerator(new InvariantOptions { MaxCandidates = 5 }).Generate(model);
 

@@ -6,26 +6,6 @@ namespace LogicProof.Proof.Tests.Invariants;
 /// <summary>Invented schemes for the invariant generator's tests (fictional places and names).</summary>
 internal static class InvariantSchemes
 {
-    /// <summary>Two TONs on the same input: FAST's counter is min(SLOW's counter, 2500) at every reachable state.</summary>
-    public const string TwoTimers = """
-        // Quillmere 115 kV substation, breaker QM-7, two-stage gas alarm (fictional)
-        scheme QM7_STAGES;
-        frequency 60 Hz;
-        scan 2 ms;
-        inputs
-          GAS_LOW : bool;
-        end
-        locals
-          FAST : bool;
-          SLOW : bool;
-        end
-        logic
-          FAST := TON(GAS_LOW, T#5s);
-          SLOW := TON(GAS_LOW, T#10s);
-        end
-        require SLOW_AFTER_FAST: SLOW -> FAST;
-        """;
-
     /// <summary>
     /// An SR lockout whose output is also read before it is written (so it has a last-scan slot), and a rising edge on
     /// the close output, which is also read before it is written.

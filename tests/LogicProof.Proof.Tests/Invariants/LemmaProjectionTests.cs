@@ -3,7 +3,7 @@ using LogicProof.Proof.Engines;
 using LogicProof.Proof.Invariants;
 using LogicProof.Proof.Lemmas;
 using LogicProof.Proof.Results;
-using LogicProof.Proof.Tests.Oracle;
+using LogicProof.Proof.Tests.Support;
 
 namespace LogicProof.Proof.Tests.Invariants;
 
@@ -37,8 +37,8 @@ public sealed class LemmaProjectionTests
     [Fact]
     public async Task Onto_WhenLemmasOfTheWholeModelMeetOneCone_KeepsThoseOfTheConeAndTheyStillProve()
     {
-        var model = LplModels.Load(TwoBays);
-        var property = LplModels.Property(model, "BAY_7");
+        var model = SchemeLoader.Load(TwoBays);
+        var property = SchemeLoader.Property(model, "BAY_7");
         var slice = ConeSlicer.Slice(model, [property.Cell]);
         var lemmas = new InvariantGenerator().Generate(model);
 
@@ -57,7 +57,7 @@ public sealed class LemmaProjectionTests
     [Fact]
     public void Onto_WhenTheTargetIsTheSameModel_KeepsEveryLemma()
     {
-        var model = LplModels.Load(TwoBays);
+        var model = SchemeLoader.Load(TwoBays);
         var lemmas = new InvariantGenerator().Generate(model);
 
         var projected = LemmaProjection.Onto(lemmas, model, model);

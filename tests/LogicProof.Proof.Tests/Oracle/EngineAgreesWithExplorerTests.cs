@@ -6,6 +6,7 @@ using LogicProof.Proof.Invariants;
 using LogicProof.Proof.Lemmas;
 using LogicProof.Proof.Orchestration;
 using LogicProof.Proof.Results;
+using LogicProof.Proof.Tests.Support;
 using Xunit.Abstractions;
 
 namespace LogicProof.Proof.Tests.Oracle;
@@ -60,7 +61,7 @@ public sealed class EngineAgreesWithExplorerTests(ITestOutputHelper output)
 
     private static void CheckScheme(SchemeRecipe recipe, OracleTally tally)
     {
-        var model = LplModels.Load(recipe.Source, "generated.lpl");
+        var model = SchemeLoader.Load(recipe.Source, "generated.lpl");
         tally.Scheme();
         var exploration = new ExplicitStateExplorer(model).Explore(MaxExploredStates);
         if (!exploration.Complete)

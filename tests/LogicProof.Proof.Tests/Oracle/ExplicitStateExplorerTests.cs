@@ -1,3 +1,5 @@
+using LogicProof.Proof.Tests.Support;
+
 namespace LogicProof.Proof.Tests.Oracle;
 
 /// <summary>The oracle itself must be right, or the agreement test proves nothing: small cases worked by hand.</summary>
@@ -9,7 +11,7 @@ public sealed class ExplicitStateExplorerTests
     public void Explore_WhenAnOnDelayClosesAfterItsPreset_ReportsPresetPlusOneScans(int presetScans, long expectedScans)
     {
         // TON: Q rises at the (n+1)-th consecutive scan with IN TRUE (IEC 61131-3 ed.3 §6.6.3.5.4, TON timing).
-        var model = LplModels.Load(Delay($"T#{presetScans}ms", assume: string.Empty));
+        var model = SchemeLoader.Load(Delay($"T#{presetScans}ms", assume: string.Empty));
 
         var exploration = new ExplicitStateExplorer(model).Explore(1_000);
 
@@ -20,7 +22,7 @@ public sealed class ExplicitStateExplorerTests
     [Fact]
     public void Explore_WhenAnAssumptionForbidsTheCommand_FindsNoViolation()
     {
-        var model = LplModels.Load(Delay("T#2ms", assume: "assume NO_COMMAND: NOT CMD;"));
+        var model = SchemeLoader.Load(Delay("T#2ms", assume: "assume NO_COMMAND: NOT CMD;"));
 
         var exploration = new ExplicitStateExplorer(model).Explore(1_000);
 
@@ -33,7 +35,7 @@ public sealed class ExplicitStateExplorerTests
     {
         // The only violating scans have CMD TRUE, which the assumption forbids in that very scan: a scan with a FALSE
         // assumption is a dead end, and its property value does not count.
-        var model = LplModels.Load("""
+        var model = SchemeLoader.Load("""
             // Quillmere test bay, direct close (invented)
             scheme ORACLE_DIRECT;
             frequency 50 Hz;
@@ -61,7 +63,7 @@ public sealed class ExplicitStateExplorerTests
     [InlineData(" init FALSE", null)]
     public void Explore_WhenASealInHasNoDeclaredPowerUp_TriesBothValues(string init, long? expected)
     {
-        var model = LplModels.Load($$"""
+        var model = SchemeLoader.Load($$"""
             // Quillmere test bay, seal-in (invented)
             scheme ORACLE_SEAL;
             frequency 50 Hz;
@@ -86,7 +88,7 @@ public sealed class ExplicitStateExplorerTests
     [Fact]
     public void Explore_WhenTheStateLimitIsReached_SaysTheSearchIsIncomplete()
     {
-        var model = LplModels.Load(Delay("T#4ms", assume: string.Empty));
+        var model = SchemeLoader.Load(Delay("T#4ms", assume: string.Empty));
 
         var exploration = new ExplicitStateExplorer(model).Explore(2);
 

@@ -32,9 +32,6 @@ internal sealed class SchemeRecipe
 
     public string Source { get; }
 
-    public IReadOnlyList<string> RequirementNames =>
-        [.. Enumerable.Range(1, _requirements).Select(r => string.Create(CultureInfo.InvariantCulture, $"R{r}"))];
-
     public override string ToString() => Source;
 
     private string Write()

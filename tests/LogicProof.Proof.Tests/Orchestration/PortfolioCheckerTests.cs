@@ -114,6 +114,8 @@ public sealed class PortfolioCheckerTests
         var on = await checker.CheckAsync(model, new CheckOptions { MaxDepth = 12 });
         var off = await checker.CheckAsync(model, new CheckOptions { MaxDepth = 12, Accelerate = false });
 
+        Assert.NotEmpty(on);
+        Assert.Equal(on.Count, off.Count);
         for (var i = 0; i < on.Count; i++)
         {
             if (off[i].Verdict is Inconclusive)

@@ -1,8 +1,7 @@
-using LogicProof.Language;
-using LogicProof.Model.Lowering;
 using LogicProof.Model.Scan;
 using LogicProof.Proof.Orchestration;
 using LogicProof.Proof.Results;
+using LogicProof.Proof.Tests.Support;
 
 namespace LogicProof.Proof.Tests.Orchestration;
 
@@ -93,7 +92,7 @@ public sealed class PowerUpSensitivityTests
     [Fact]
     public void WithPowerUp_WhenSlotsAreFixed_ChangesOnlyThoseSlots()
     {
-        var model = Load(Scheme);
+        var model = SchemeLoader.Load(Scheme);
         var unknown = model.StateSlots.Where(s => s.PowerUp is UnknownPowerUp).Select(s => s.Index).ToList();
 
         var fixedModel = PowerUpSensitivity.WithPowerUp(model, [unknown[0]], true);
@@ -112,14 +111,8 @@ public sealed class PowerUpSensitivityTests
 
     private static async Task<(ScanModel Model, PropertyResult Result)> CheckAsync(string property, string text = Scheme)
     {
-        var model = Load(text);
-        var result = await new PortfolioChecker().CheckPropertyAsync(model, model.Properties.Single(p => p.Name == property), Options);
+        var model = SchemeLoader.Load(text);
+        var result = await new PortfolioChecker().CheckPropertyAsync(model, SchemeLoader.Property(model, property), Options);
         return (model, result);
-    }
-
-    private static ScanModel Load(string text)
-    {
-        var scheme = FrontEnd.LoadText("power-up.lpl", text).Scheme ?? throw new InvalidOperationException("the test scheme has an error");
-        return ModelBuilder.Build(scheme).Model ?? throw new InvalidOperationException("the test scheme has no model");
     }
 }

@@ -1,4 +1,3 @@
-using System.Runtime.CompilerServices;
 using LogicProof.Core.Diagnostics;
 using LogicProof.Model.Scan;
 using LogicProof.Proof.Engines;
@@ -6,6 +5,7 @@ using LogicProof.Proof.Invariants;
 using LogicProof.Proof.Orchestration;
 using LogicProof.Proof.Results;
 using LogicProof.Proof.Tests.Oracle;
+using LogicProof.Proof.Tests.Support;
 
 namespace LogicProof.Proof.Tests.Regression;
 
@@ -63,7 +63,7 @@ public sealed class RegressionTests
         var path = Path.Combine(Root(), folder, file);
         var source = await File.ReadAllTextAsync(path);
         Assert.StartsWith("//", source.TrimStart());
-        var (model, diagnostics) = LplModels.TryLoad(source, file);
+        var (model, diagnostics) = SchemeLoader.TryLoad(source, file);
 
         if (folder == "error")
         {
@@ -104,12 +104,6 @@ public sealed class RegressionTests
 
     private static int Count(string folder) => Directory.EnumerateFiles(Path.Combine(Root(), folder), "*.lpl").Count();
 
-    /// <summary>The folders copied next to the test assembly, or else the source folder beside this file.</summary>
-    private static string Root()
-    {
-        var copied = Path.Combine(AppContext.BaseDirectory, "Regression");
-        return Directory.Exists(Path.Combine(copied, "proved")) ? copied : SourceFolder();
-    }
-
-    private static string SourceFolder([CallerFilePath] string thisFile = "") => Path.GetDirectoryName(thisFile)!;
+    /// <summary>The folders as the project copies them next to the test assembly.</summary>
+    private static string Root() => Path.Combine(AppContext.BaseDirectory, "Regression");
 }

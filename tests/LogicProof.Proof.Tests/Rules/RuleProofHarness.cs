@@ -1,10 +1,10 @@
-using LogicProof.Core.Diagnostics;
 using LogicProof.Language;
 using LogicProof.Model.Lowering;
 using LogicProof.Model.Rules;
 using LogicProof.Model.Scan;
 using LogicProof.Proof.Orchestration;
 using LogicProof.Proof.Results;
+using LogicProof.Proof.Tests.Support;
 
 namespace LogicProof.Proof.Tests.Rules;
 
@@ -19,17 +19,17 @@ internal static class RuleProofHarness
         var front = FrontEnd.LoadText("rules.lpl", text);
         if (front.Scheme is null)
         {
-            throw new InvalidOperationException(Describe(front.Diagnostics));
+            throw new InvalidOperationException(SchemeLoader.Describe(front.Diagnostics));
         }
 
         var setup = RuleSetup.Prepare(front.Scheme, ruleIds.Length == 0 ? null : new RuleSelection(ruleIds, []));
         if (setup.ModelScheme is null)
         {
-            throw new InvalidOperationException(Describe(setup.Diagnostics));
+            throw new InvalidOperationException(SchemeLoader.Describe(setup.Diagnostics));
         }
 
         var built = ModelBuilder.Build(setup.ModelScheme, setup.ExtraProperties);
-        return (built.Model ?? throw new InvalidOperationException(Describe(built.Diagnostics)), setup);
+        return (built.Model ?? throw new InvalidOperationException(SchemeLoader.Describe(built.Diagnostics)), setup);
     }
 
     public static async Task<PropertyVerdict> CheckAsync(string text, string ruleId)
@@ -65,7 +65,4 @@ internal static class RuleProofHarness
             ?? throw new InvalidOperationException($"'{name}' is not in the trace");
         return Assert.IsType<BoolTraceValue>(value.Value).Value;
     }
-
-    private static string Describe(IEnumerable<Diagnostic> diagnostics) =>
-        string.Join(Environment.NewLine, diagnostics.Select(d => DiagnosticFormatter.Format(d, null)));
 }

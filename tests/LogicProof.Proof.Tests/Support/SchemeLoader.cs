@@ -5,19 +5,27 @@ using LogicProof.Model.Scan;
 
 namespace LogicProof.Proof.Tests.Support;
 
-/// <summary>Builds the scan model of a scheme given as source text; a scheme with an error fails the test.</summary>
+/// <summary>Source text to scan model through the product's own front end and lowering, with every diagnostic.</summary>
 internal static class SchemeLoader
 {
-    public static ScanModel Load(string source, string path = "test.lpl")
+    public static (ScanModel? Model, IReadOnlyList<Diagnostic> Diagnostics) TryLoad(string source, string path)
     {
         var front = FrontEnd.LoadText(path, source);
         if (front.Scheme is null)
         {
-            throw new InvalidOperationException(Describe(front.Diagnostics));
+            return (null, front.Diagnostics);
         }
 
         var built = ModelBuilder.Build(front.Scheme);
-        return built.Model ?? throw new InvalidOperationException(Describe(built.Diagnostics));
+        return (built.Model, [.. front.Diagnostics, .. built.Diagnostics]);
+    }
+
+    /// <summary>The model of a scheme that must be free of errors; an error fails the test with the diagnostics.</summary>
+    public static ScanModel Load(string source, string path = "test.lpl")
+    {
+        var (model, diagnostics) = TryLoad(source, path);
+        return model ?? throw new InvalidOperationException(
+            "the scheme has errors:" + Environment.NewLine + Describe(diagnostics) + Environment.NewLine + source);
     }
 
     public static ModelProperty Property(ScanModel model, string name) =>
@@ -26,6 +34,9 @@ internal static class SchemeLoader
     public static int Cell(ScanModel model, string name) =>
         model.Cells.Single(c => string.Equals(c.Name, name, StringComparison.OrdinalIgnoreCase)).Index;
 
-    private static string Describe(IEnumerable<Diagnostic> diagnostics) =>
+    public static int CounterSlotOf(ScanModel model, string cellName) =>
+        model.StateSlots.Single(s => s.Kind == StateSlotKind.TimerCounter && s.Cell == Cell(model, cellName)).Index;
+
+    public static string Describe(IEnumerable<Diagnostic> diagnostics) =>
         string.Join(Environment.NewLine, diagnostics.Select(d => DiagnosticFormatter.Format(d, null)));
 }

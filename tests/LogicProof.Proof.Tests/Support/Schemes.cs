@@ -68,6 +68,9 @@ internal static class Schemes
         require CLOSES_ONLY_ON_COMMAND: CLOSE_OUT -> CLOSE_CMD;
         """;
 
+    /// <summary><see cref="ShortDelay"/> with an assumption that rules the command out, so the close never happens.</summary>
+    public const string ShortDelayAssumingNoCommand = ShortDelay + "\nassume NO_COMMAND: NOT CLOSE_CMD;\n";
+
     /// <summary>
     /// A 10 s alarm timer at a 2 ms scan (5,000 scans): the alarm is reachable only after 5,000 scans of a standing
     /// fault, and it always implies the fault.
@@ -123,7 +126,10 @@ internal static class Schemes
         require NOT_BAD: NOT BAD;
         """;
 
-    /// <summary>Two on-delays of one input; SLOW implies FAST only through a relation between their counters.</summary>
+    /// <summary>
+    /// Two on-delays of one input; SLOW implies FAST only through a relation between their counters: FAST's counter is
+    /// min(SLOW's counter, 2500) at every reachable state.
+    /// </summary>
     public const string TwoTimers = """
         // Quillmere 115 kV substation, breaker QM-7, two-stage gas alarm (fictional)
         scheme QM7_STAGES;
