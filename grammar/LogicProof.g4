@@ -48,8 +48,10 @@ settingDecl
     : name=IDENT COLON typeName EQ value=literal description? SEMI
     ;
 
+// `init retained`: a non-volatile memory that keeps its value across a relay restart (IEC 61131-3 RETAIN). The
+// word is an IDENT checked after parsing, so `retained` stays usable as a name elsewhere.
 variableDecl
-    : name=IDENT COLON typeName (INIT initial=literal)? description? SEMI
+    : name=IDENT COLON typeName (INIT (initial=literal | retained=IDENT))? description? SEMI
     ;
 
 typeName

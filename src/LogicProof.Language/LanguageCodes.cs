@@ -42,6 +42,9 @@ public static class LanguageCodes
     /// <summary>A power frequency or a scan interval of zero.</summary>
     public const string TimingNotPositive = "LP1012";
 
+    /// <summary>A word after <c>init</c> that is not <c>retained</c>.</summary>
+    public const string UnknownInitWord = "LP1013";
+
     /// <summary>A name declared twice (names are case-insensitive); the first declaration is a related location.</summary>
     public const string DuplicateName = "LP2001";
 
@@ -104,5 +107,8 @@ public static class LanguageCodes
 
     /// <summary>Two requirements or two assumptions with the same name.</summary>
     public const string DuplicatePropertyName = "LP2021";
+
+    /// <summary><c>init retained</c> on a variable that is not bool (only a bool memory may have an unknown power-up value).</summary>
+    public const string RetainedNeedsBool = "LP2022";
 
 }

@@ -108,7 +108,15 @@ internal sealed class DeclarationBinder(DiagnosticBag diagnostics)
             }
         }
 
-        return new Symbol(variable.Name, kind, variable.Type, variable.NameSpan, variable.Description) { PowerUp = powerUp };
+        if (variable.Retained && variable.Type != ValueType.Bool)
+        {
+            diagnostics.Error(
+                LanguageCodes.RetainedNeedsBool,
+                $"'{variable.Name}' is {TypeText.Of(variable.Type)}; init retained is for bool memories (a lockout, a latch), whose retained value the checker leaves open",
+                variable.Span);
+        }
+
+        return new Symbol(variable.Name, kind, variable.Type, variable.NameSpan, variable.Description) { PowerUp = powerUp, Retained = variable.Retained };
     }
 
     private void RejectTime(ValueType type, string what, SourceSpan span)

@@ -16,6 +16,9 @@ public sealed record Symbol(string Name, SymbolKind Kind, ValueType Type, Source
     /// <summary>Locals and outputs only: the declared power-up value, if any.</summary>
     public BoundConstant? PowerUp { get; init; }
 
+    /// <summary>Locals and outputs only: declared <c>init retained</c> (non-volatile, IEC 61131-3 RETAIN); <see cref="PowerUp"/> is then null.</summary>
+    public bool Retained { get; init; }
+
     /// <summary>Settings only: the setting's value.</summary>
     public BoundConstant? SettingValue { get; init; }
 }

@@ -1042,12 +1042,16 @@ public partial class LogicProofParser : Parser {
 	public partial class VariableDeclContext : ParserRuleContext {
 		public IToken name;
 		public LiteralContext initial;
+		public IToken retained;
 		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode COLON() { return GetToken(LogicProofParser.COLON, 0); }
 		[System.Diagnostics.DebuggerNonUserCode] public TypeNameContext typeName() {
 			return GetRuleContext<TypeNameContext>(0);
 		}
 		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode SEMI() { return GetToken(LogicProofParser.SEMI, 0); }
-		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode IDENT() { return GetToken(LogicProofParser.IDENT, 0); }
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode[] IDENT() { return GetTokens(LogicProofParser.IDENT); }
+		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode IDENT(int i) {
+			return GetToken(LogicProofParser.IDENT, i);
+		}
 		[System.Diagnostics.DebuggerNonUserCode] public ITerminalNode INIT() { return GetToken(LogicProofParser.INIT, 0); }
 		[System.Diagnostics.DebuggerNonUserCode] public DescriptionContext description() {
 			return GetRuleContext<DescriptionContext>(0);
@@ -1092,29 +1096,49 @@ public partial class LogicProofParser : Parser {
 			Match(COLON);
 			State = 165;
 			typeName();
-			State = 168;
+			State = 171;
 			ErrorHandler.Sync(this);
 			_la = TokenStream.LA(1);
 			if (_la==INIT) {
 				{
 				State = 166;
 				Match(INIT);
-				State = 167;
-				_localctx.initial = literal();
+				State = 169;
+				ErrorHandler.Sync(this);
+				switch (TokenStream.LA(1)) {
+				case TRUE:
+				case FALSE:
+				case TIME_LITERAL:
+				case MINUS:
+				case NUMBER:
+					{
+					State = 167;
+					_localctx.initial = literal();
+					}
+					break;
+				case IDENT:
+					{
+					State = 168;
+					_localctx.retained = Match(IDENT);
+					}
+					break;
+				default:
+					throw new NoViableAltException(this);
+				}
 				}
 			}
 
-			State = 171;
+			State = 174;
 			ErrorHandler.Sync(this);
 			_la = TokenStream.LA(1);
 			if (_la==STRING) {
 				{
-				State = 170;
+				State = 173;
 				description();
 				}
 			}
 
-			State = 173;
+			State = 176;
 			Match(SEMI);
 			}
 		}
@@ -1164,7 +1188,7 @@ public partial class LogicProofParser : Parser {
 		try {
 			EnterOuterAlt(_localctx, 1);
 			{
-			State = 175;
+			State = 178;
 			_la = TokenStream.LA(1);
 			if ( !((((_la) & ~0x3f) == 0 && ((1L << _la) & 114688L) != 0)) ) {
 			ErrorHandler.RecoverInline(this);
@@ -1288,14 +1312,14 @@ public partial class LogicProofParser : Parser {
 		LiteralContext _localctx = new LiteralContext(Context, State);
 		EnterRule(_localctx, 18, RULE_literal);
 		try {
-			State = 181;
+			State = 184;
 			ErrorHandler.Sync(this);
-			switch ( Interpreter.AdaptivePredict(TokenStream,16,Context) ) {
+			switch ( Interpreter.AdaptivePredict(TokenStream,17,Context) ) {
 			case 1:
 				_localctx = new TrueLiteralContext(_localctx);
 				EnterOuterAlt(_localctx, 1);
 				{
-				State = 177;
+				State = 180;
 				Match(TRUE);
 				}
 				break;
@@ -1303,7 +1327,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new FalseLiteralContext(_localctx);
 				EnterOuterAlt(_localctx, 2);
 				{
-				State = 178;
+				State = 181;
 				Match(FALSE);
 				}
 				break;
@@ -1311,7 +1335,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new NumberLiteralContext(_localctx);
 				EnterOuterAlt(_localctx, 3);
 				{
-				State = 179;
+				State = 182;
 				signedNumber();
 				}
 				break;
@@ -1319,7 +1343,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new DurationLiteralContext(_localctx);
 				EnterOuterAlt(_localctx, 4);
 				{
-				State = 180;
+				State = 183;
 				duration();
 				}
 				break;
@@ -1370,17 +1394,17 @@ public partial class LogicProofParser : Parser {
 		try {
 			EnterOuterAlt(_localctx, 1);
 			{
-			State = 184;
+			State = 187;
 			ErrorHandler.Sync(this);
 			_la = TokenStream.LA(1);
 			if (_la==MINUS) {
 				{
-				State = 183;
+				State = 186;
 				Match(MINUS);
 				}
 			}
 
-			State = 186;
+			State = 189;
 			Match(NUMBER);
 			}
 		}
@@ -1455,14 +1479,14 @@ public partial class LogicProofParser : Parser {
 		DurationContext _localctx = new DurationContext(Context, State);
 		EnterRule(_localctx, 22, RULE_duration);
 		try {
-			State = 191;
+			State = 194;
 			ErrorHandler.Sync(this);
 			switch (TokenStream.LA(1)) {
 			case TIME_LITERAL:
 				_localctx = new IecDurationContext(_localctx);
 				EnterOuterAlt(_localctx, 1);
 				{
-				State = 188;
+				State = 191;
 				Match(TIME_LITERAL);
 				}
 				break;
@@ -1470,9 +1494,9 @@ public partial class LogicProofParser : Parser {
 				_localctx = new UnitDurationContext(_localctx);
 				EnterOuterAlt(_localctx, 2);
 				{
-				State = 189;
+				State = 192;
 				Match(NUMBER);
-				State = 190;
+				State = 193;
 				((UnitDurationContext)_localctx).unit = Match(IDENT);
 				}
 				break;
@@ -1529,13 +1553,13 @@ public partial class LogicProofParser : Parser {
 		try {
 			EnterOuterAlt(_localctx, 1);
 			{
-			State = 193;
-			_localctx.target = Match(IDENT);
-			State = 194;
-			Match(ASSIGN);
-			State = 195;
-			expr(0);
 			State = 196;
+			_localctx.target = Match(IDENT);
+			State = 197;
+			Match(ASSIGN);
+			State = 198;
+			expr(0);
+			State = 199;
 			Match(SEMI);
 			}
 		}
@@ -1862,7 +1886,7 @@ public partial class LogicProofParser : Parser {
 			int _alt;
 			EnterOuterAlt(_localctx, 1);
 			{
-			State = 202;
+			State = 205;
 			ErrorHandler.Sync(this);
 			switch (TokenStream.LA(1)) {
 			case NOT:
@@ -1872,7 +1896,7 @@ public partial class LogicProofParser : Parser {
 				Context = _localctx;
 				_prevctx = _localctx;
 
-				State = 199;
+				State = 202;
 				((UnaryExprContext)_localctx).op = TokenStream.LT(1);
 				_la = TokenStream.LA(1);
 				if ( !(_la==NOT || _la==MINUS) ) {
@@ -1882,7 +1906,7 @@ public partial class LogicProofParser : Parser {
 					ErrorHandler.ReportMatch(this);
 				    Consume();
 				}
-				State = 200;
+				State = 203;
 				((UnaryExprContext)_localctx).operand = expr(10);
 				}
 				break;
@@ -1896,7 +1920,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new PrimaryExprContext(_localctx);
 				Context = _localctx;
 				_prevctx = _localctx;
-				State = 201;
+				State = 204;
 				primary();
 				}
 				break;
@@ -1904,26 +1928,26 @@ public partial class LogicProofParser : Parser {
 				throw new NoViableAltException(this);
 			}
 			Context.Stop = TokenStream.LT(-1);
-			State = 230;
+			State = 233;
 			ErrorHandler.Sync(this);
-			_alt = Interpreter.AdaptivePredict(TokenStream,21,Context);
+			_alt = Interpreter.AdaptivePredict(TokenStream,22,Context);
 			while ( _alt!=2 && _alt!=global::Antlr4.Runtime.Atn.ATN.INVALID_ALT_NUMBER ) {
 				if ( _alt==1 ) {
 					if ( ParseListeners!=null )
 						TriggerExitRuleEvent();
 					_prevctx = _localctx;
 					{
-					State = 228;
+					State = 231;
 					ErrorHandler.Sync(this);
-					switch ( Interpreter.AdaptivePredict(TokenStream,20,Context) ) {
+					switch ( Interpreter.AdaptivePredict(TokenStream,21,Context) ) {
 					case 1:
 						{
 						_localctx = new MultiplicativeExprContext(new ExprContext(_parentctx, _parentState));
 						((MultiplicativeExprContext)_localctx).left = _prevctx;
 						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 204;
+						State = 207;
 						if (!(Precpred(Context, 9))) throw new FailedPredicateException(this, "Precpred(Context, 9)");
-						State = 205;
+						State = 208;
 						((MultiplicativeExprContext)_localctx).op = TokenStream.LT(1);
 						_la = TokenStream.LA(1);
 						if ( !(_la==STAR || _la==SLASH) ) {
@@ -1933,7 +1957,7 @@ public partial class LogicProofParser : Parser {
 							ErrorHandler.ReportMatch(this);
 						    Consume();
 						}
-						State = 206;
+						State = 209;
 						((MultiplicativeExprContext)_localctx).right = expr(10);
 						}
 						break;
@@ -1942,9 +1966,9 @@ public partial class LogicProofParser : Parser {
 						_localctx = new AdditiveExprContext(new ExprContext(_parentctx, _parentState));
 						((AdditiveExprContext)_localctx).left = _prevctx;
 						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 207;
+						State = 210;
 						if (!(Precpred(Context, 8))) throw new FailedPredicateException(this, "Precpred(Context, 8)");
-						State = 208;
+						State = 211;
 						((AdditiveExprContext)_localctx).op = TokenStream.LT(1);
 						_la = TokenStream.LA(1);
 						if ( !(_la==PLUS || _la==MINUS) ) {
@@ -1954,7 +1978,7 @@ public partial class LogicProofParser : Parser {
 							ErrorHandler.ReportMatch(this);
 						    Consume();
 						}
-						State = 209;
+						State = 212;
 						((AdditiveExprContext)_localctx).right = expr(9);
 						}
 						break;
@@ -1963,9 +1987,9 @@ public partial class LogicProofParser : Parser {
 						_localctx = new CompareExprContext(new ExprContext(_parentctx, _parentState));
 						((CompareExprContext)_localctx).left = _prevctx;
 						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 210;
+						State = 213;
 						if (!(Precpred(Context, 7))) throw new FailedPredicateException(this, "Precpred(Context, 7)");
-						State = 211;
+						State = 214;
 						((CompareExprContext)_localctx).op = TokenStream.LT(1);
 						_la = TokenStream.LA(1);
 						if ( !((((_la) & ~0x3f) == 0 && ((1L << _la) & 67645734912L) != 0)) ) {
@@ -1975,7 +1999,7 @@ public partial class LogicProofParser : Parser {
 							ErrorHandler.ReportMatch(this);
 						    Consume();
 						}
-						State = 212;
+						State = 215;
 						((CompareExprContext)_localctx).right = expr(8);
 						}
 						break;
@@ -1984,11 +2008,11 @@ public partial class LogicProofParser : Parser {
 						_localctx = new AndExprContext(new ExprContext(_parentctx, _parentState));
 						((AndExprContext)_localctx).left = _prevctx;
 						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 213;
+						State = 216;
 						if (!(Precpred(Context, 6))) throw new FailedPredicateException(this, "Precpred(Context, 6)");
-						State = 214;
+						State = 217;
 						Match(AND);
-						State = 215;
+						State = 218;
 						((AndExprContext)_localctx).right = expr(7);
 						}
 						break;
@@ -1997,11 +2021,11 @@ public partial class LogicProofParser : Parser {
 						_localctx = new XorExprContext(new ExprContext(_parentctx, _parentState));
 						((XorExprContext)_localctx).left = _prevctx;
 						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 216;
+						State = 219;
 						if (!(Precpred(Context, 5))) throw new FailedPredicateException(this, "Precpred(Context, 5)");
-						State = 217;
+						State = 220;
 						Match(XOR);
-						State = 218;
+						State = 221;
 						((XorExprContext)_localctx).right = expr(6);
 						}
 						break;
@@ -2010,11 +2034,11 @@ public partial class LogicProofParser : Parser {
 						_localctx = new OrExprContext(new ExprContext(_parentctx, _parentState));
 						((OrExprContext)_localctx).left = _prevctx;
 						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 219;
+						State = 222;
 						if (!(Precpred(Context, 4))) throw new FailedPredicateException(this, "Precpred(Context, 4)");
-						State = 220;
+						State = 223;
 						Match(OR);
-						State = 221;
+						State = 224;
 						((OrExprContext)_localctx).right = expr(5);
 						}
 						break;
@@ -2023,11 +2047,11 @@ public partial class LogicProofParser : Parser {
 						_localctx = new SinceExprContext(new ExprContext(_parentctx, _parentState));
 						((SinceExprContext)_localctx).left = _prevctx;
 						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 222;
+						State = 225;
 						if (!(Precpred(Context, 3))) throw new FailedPredicateException(this, "Precpred(Context, 3)");
-						State = 223;
+						State = 226;
 						Match(SINCE);
-						State = 224;
+						State = 227;
 						((SinceExprContext)_localctx).right = expr(4);
 						}
 						break;
@@ -2036,20 +2060,20 @@ public partial class LogicProofParser : Parser {
 						_localctx = new ImpliesExprContext(new ExprContext(_parentctx, _parentState));
 						((ImpliesExprContext)_localctx).left = _prevctx;
 						PushNewRecursionContext(_localctx, _startState, RULE_expr);
-						State = 225;
+						State = 228;
 						if (!(Precpred(Context, 2))) throw new FailedPredicateException(this, "Precpred(Context, 2)");
-						State = 226;
+						State = 229;
 						Match(IMPLIES);
-						State = 227;
+						State = 230;
 						((ImpliesExprContext)_localctx).right = expr(2);
 						}
 						break;
 					}
 					} 
 				}
-				State = 232;
+				State = 235;
 				ErrorHandler.Sync(this);
-				_alt = Interpreter.AdaptivePredict(TokenStream,21,Context);
+				_alt = Interpreter.AdaptivePredict(TokenStream,22,Context);
 			}
 			}
 		}
@@ -2242,18 +2266,18 @@ public partial class LogicProofParser : Parser {
 		EnterRule(_localctx, 28, RULE_primary);
 		int _la;
 		try {
-			State = 255;
+			State = 258;
 			ErrorHandler.Sync(this);
-			switch ( Interpreter.AdaptivePredict(TokenStream,24,Context) ) {
+			switch ( Interpreter.AdaptivePredict(TokenStream,25,Context) ) {
 			case 1:
 				_localctx = new ParenPrimaryContext(_localctx);
 				EnterOuterAlt(_localctx, 1);
 				{
-				State = 233;
+				State = 236;
 				Match(LPAREN);
-				State = 234;
+				State = 237;
 				expr(0);
-				State = 235;
+				State = 238;
 				Match(RPAREN);
 				}
 				break;
@@ -2261,7 +2285,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new TruePrimaryContext(_localctx);
 				EnterOuterAlt(_localctx, 2);
 				{
-				State = 237;
+				State = 240;
 				Match(TRUE);
 				}
 				break;
@@ -2269,7 +2293,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new FalsePrimaryContext(_localctx);
 				EnterOuterAlt(_localctx, 3);
 				{
-				State = 238;
+				State = 241;
 				Match(FALSE);
 				}
 				break;
@@ -2277,7 +2301,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new DurationPrimaryContext(_localctx);
 				EnterOuterAlt(_localctx, 4);
 				{
-				State = 239;
+				State = 242;
 				duration();
 				}
 				break;
@@ -2285,7 +2309,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new NumberPrimaryContext(_localctx);
 				EnterOuterAlt(_localctx, 5);
 				{
-				State = 240;
+				State = 243;
 				Match(NUMBER);
 				}
 				break;
@@ -2293,37 +2317,37 @@ public partial class LogicProofParser : Parser {
 				_localctx = new CallPrimaryContext(_localctx);
 				EnterOuterAlt(_localctx, 6);
 				{
-				State = 241;
+				State = 244;
 				((CallPrimaryContext)_localctx).callee = Match(IDENT);
-				State = 242;
+				State = 245;
 				Match(LPAREN);
-				State = 251;
+				State = 254;
 				ErrorHandler.Sync(this);
 				_la = TokenStream.LA(1);
 				if ((((_la) & ~0x3f) == 0 && ((1L << _la) & 106790137626624L) != 0)) {
 					{
-					State = 243;
+					State = 246;
 					argument();
-					State = 248;
+					State = 251;
 					ErrorHandler.Sync(this);
 					_la = TokenStream.LA(1);
 					while (_la==COMMA) {
 						{
 						{
-						State = 244;
+						State = 247;
 						Match(COMMA);
-						State = 245;
+						State = 248;
 						argument();
 						}
 						}
-						State = 250;
+						State = 253;
 						ErrorHandler.Sync(this);
 						_la = TokenStream.LA(1);
 					}
 					}
 				}
 
-				State = 253;
+				State = 256;
 				Match(RPAREN);
 				}
 				break;
@@ -2331,7 +2355,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new NamePrimaryContext(_localctx);
 				EnterOuterAlt(_localctx, 7);
 				{
-				State = 254;
+				State = 257;
 				Match(IDENT);
 				}
 				break;
@@ -2385,19 +2409,19 @@ public partial class LogicProofParser : Parser {
 		try {
 			EnterOuterAlt(_localctx, 1);
 			{
-			State = 259;
+			State = 262;
 			ErrorHandler.Sync(this);
-			switch ( Interpreter.AdaptivePredict(TokenStream,25,Context) ) {
+			switch ( Interpreter.AdaptivePredict(TokenStream,26,Context) ) {
 			case 1:
 				{
-				State = 257;
+				State = 260;
 				_localctx.name = Match(IDENT);
-				State = 258;
+				State = 261;
 				Match(ASSIGN);
 				}
 				break;
 			}
-			State = 261;
+			State = 264;
 			expr(0);
 			}
 		}
@@ -2458,29 +2482,29 @@ public partial class LogicProofParser : Parser {
 		try {
 			EnterOuterAlt(_localctx, 1);
 			{
-			State = 263;
+			State = 266;
 			_localctx.role = Match(IDENT);
-			State = 264;
+			State = 267;
 			Match(EQ);
-			State = 265;
+			State = 268;
 			roleValue();
-			State = 270;
+			State = 273;
 			ErrorHandler.Sync(this);
 			_la = TokenStream.LA(1);
 			while (_la==COMMA) {
 				{
 				{
-				State = 266;
+				State = 269;
 				Match(COMMA);
-				State = 267;
+				State = 270;
 				roleValue();
 				}
 				}
-				State = 272;
+				State = 275;
 				ErrorHandler.Sync(this);
 				_la = TokenStream.LA(1);
 			}
-			State = 273;
+			State = 276;
 			Match(SEMI);
 			}
 		}
@@ -2595,14 +2619,14 @@ public partial class LogicProofParser : Parser {
 		RoleValueContext _localctx = new RoleValueContext(Context, State);
 		EnterRule(_localctx, 34, RULE_roleValue);
 		try {
-			State = 279;
+			State = 282;
 			ErrorHandler.Sync(this);
 			switch (TokenStream.LA(1)) {
 			case IDENT:
 				_localctx = new NameRoleValueContext(_localctx);
 				EnterOuterAlt(_localctx, 1);
 				{
-				State = 275;
+				State = 278;
 				Match(IDENT);
 				}
 				break;
@@ -2611,7 +2635,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new DurationRoleValueContext(_localctx);
 				EnterOuterAlt(_localctx, 2);
 				{
-				State = 276;
+				State = 279;
 				duration();
 				}
 				break;
@@ -2619,7 +2643,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new TrueRoleValueContext(_localctx);
 				EnterOuterAlt(_localctx, 3);
 				{
-				State = 277;
+				State = 280;
 				Match(TRUE);
 				}
 				break;
@@ -2627,7 +2651,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new FalseRoleValueContext(_localctx);
 				EnterOuterAlt(_localctx, 4);
 				{
-				State = 278;
+				State = 281;
 				Match(FALSE);
 				}
 				break;
@@ -2684,13 +2708,13 @@ public partial class LogicProofParser : Parser {
 		try {
 			EnterOuterAlt(_localctx, 1);
 			{
-			State = 281;
-			_localctx.key = Match(IDENT);
-			State = 282;
-			Match(EQ);
-			State = 283;
-			plantValue();
 			State = 284;
+			_localctx.key = Match(IDENT);
+			State = 285;
+			Match(EQ);
+			State = 286;
+			plantValue();
+			State = 287;
 			Match(SEMI);
 			}
 		}
@@ -2833,18 +2857,18 @@ public partial class LogicProofParser : Parser {
 		PlantValueContext _localctx = new PlantValueContext(Context, State);
 		EnterRule(_localctx, 38, RULE_plantValue);
 		try {
-			State = 294;
+			State = 297;
 			ErrorHandler.Sync(this);
-			switch ( Interpreter.AdaptivePredict(TokenStream,28,Context) ) {
+			switch ( Interpreter.AdaptivePredict(TokenStream,29,Context) ) {
 			case 1:
 				_localctx = new DurationRangeValueContext(_localctx);
 				EnterOuterAlt(_localctx, 1);
 				{
-				State = 286;
+				State = 289;
 				((DurationRangeValueContext)_localctx).low = duration();
-				State = 287;
+				State = 290;
 				Match(DOTDOT);
-				State = 288;
+				State = 291;
 				((DurationRangeValueContext)_localctx).high = duration();
 				}
 				break;
@@ -2852,7 +2876,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new SingleDurationValueContext(_localctx);
 				EnterOuterAlt(_localctx, 2);
 				{
-				State = 290;
+				State = 293;
 				duration();
 				}
 				break;
@@ -2860,7 +2884,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new TruePlantValueContext(_localctx);
 				EnterOuterAlt(_localctx, 3);
 				{
-				State = 291;
+				State = 294;
 				Match(TRUE);
 				}
 				break;
@@ -2868,7 +2892,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new FalsePlantValueContext(_localctx);
 				EnterOuterAlt(_localctx, 4);
 				{
-				State = 292;
+				State = 295;
 				Match(FALSE);
 				}
 				break;
@@ -2876,7 +2900,7 @@ public partial class LogicProofParser : Parser {
 				_localctx = new NamePlantValueContext(_localctx);
 				EnterOuterAlt(_localctx, 5);
 				{
-				State = 293;
+				State = 296;
 				Match(IDENT);
 				}
 				break;
@@ -2914,7 +2938,7 @@ public partial class LogicProofParser : Parser {
 	}
 
 	private static int[] _serializedATN = {
-		4,1,51,297,2,0,7,0,2,1,7,1,2,2,7,2,2,3,7,3,2,4,7,4,2,5,7,5,2,6,7,6,2,7,
+		4,1,51,300,2,0,7,0,2,1,7,1,2,2,7,2,2,3,7,3,2,4,7,4,2,5,7,5,2,6,7,6,2,7,
 		7,7,2,8,7,8,2,9,7,9,2,10,7,10,2,11,7,11,2,12,7,12,2,13,7,13,2,14,7,14,
 		2,15,7,15,2,16,7,16,2,17,7,17,2,18,7,18,2,19,7,19,1,0,1,0,5,0,43,8,0,10,
 		0,12,0,46,9,0,1,0,1,0,1,1,1,1,1,1,3,1,53,8,1,1,1,1,1,1,1,1,1,1,1,1,1,1,
@@ -2925,94 +2949,95 @@ public partial class LogicProofParser : Parser {
 		117,9,2,1,2,1,2,1,2,1,2,1,2,1,2,1,2,1,2,1,2,1,2,3,2,129,8,2,1,2,1,2,1,
 		2,3,2,134,8,2,1,3,1,3,1,4,1,4,1,4,1,4,3,4,142,8,4,1,4,3,4,145,8,4,1,4,
 		1,4,1,5,1,5,1,5,1,5,1,5,1,6,1,6,1,6,1,6,1,6,1,6,3,6,160,8,6,1,6,1,6,1,
-		7,1,7,1,7,1,7,1,7,3,7,169,8,7,1,7,3,7,172,8,7,1,7,1,7,1,8,1,8,1,9,1,9,
-		1,9,1,9,3,9,182,8,9,1,10,3,10,185,8,10,1,10,1,10,1,11,1,11,1,11,3,11,192,
-		8,11,1,12,1,12,1,12,1,12,1,12,1,13,1,13,1,13,1,13,3,13,203,8,13,1,13,1,
-		13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,
-		13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,5,13,229,8,13,10,13,12,13,232,
-		9,13,1,14,1,14,1,14,1,14,1,14,1,14,1,14,1,14,1,14,1,14,1,14,1,14,1,14,
-		5,14,247,8,14,10,14,12,14,250,9,14,3,14,252,8,14,1,14,1,14,3,14,256,8,
-		14,1,15,1,15,3,15,260,8,15,1,15,1,15,1,16,1,16,1,16,1,16,1,16,5,16,269,
-		8,16,10,16,12,16,272,9,16,1,16,1,16,1,17,1,17,1,17,1,17,3,17,280,8,17,
-		1,18,1,18,1,18,1,18,1,18,1,19,1,19,1,19,1,19,1,19,1,19,1,19,1,19,3,19,
-		295,8,19,1,19,0,1,26,20,0,2,4,6,8,10,12,14,16,18,20,22,24,26,28,30,32,
-		34,36,38,0,5,1,0,14,16,2,0,21,21,37,37,1,0,38,39,1,0,36,37,1,0,30,35,330,
-		0,40,1,0,0,0,2,49,1,0,0,0,4,133,1,0,0,0,6,135,1,0,0,0,8,137,1,0,0,0,10,
-		148,1,0,0,0,12,153,1,0,0,0,14,163,1,0,0,0,16,175,1,0,0,0,18,181,1,0,0,
-		0,20,184,1,0,0,0,22,191,1,0,0,0,24,193,1,0,0,0,26,202,1,0,0,0,28,255,1,
-		0,0,0,30,259,1,0,0,0,32,263,1,0,0,0,34,279,1,0,0,0,36,281,1,0,0,0,38,294,
-		1,0,0,0,40,44,3,2,1,0,41,43,3,4,2,0,42,41,1,0,0,0,43,46,1,0,0,0,44,42,
-		1,0,0,0,44,45,1,0,0,0,45,47,1,0,0,0,46,44,1,0,0,0,47,48,5,0,0,1,48,1,1,
-		0,0,0,49,50,5,1,0,0,50,52,5,46,0,0,51,53,3,6,3,0,52,51,1,0,0,0,52,53,1,
-		0,0,0,53,54,1,0,0,0,54,55,5,44,0,0,55,56,5,2,0,0,56,57,5,45,0,0,57,58,
-		5,46,0,0,58,59,5,44,0,0,59,60,5,3,0,0,60,61,3,22,11,0,61,62,5,44,0,0,62,
-		3,1,0,0,0,63,67,5,4,0,0,64,66,3,8,4,0,65,64,1,0,0,0,66,69,1,0,0,0,67,65,
-		1,0,0,0,67,68,1,0,0,0,68,70,1,0,0,0,69,67,1,0,0,0,70,134,5,11,0,0,71,75,
-		5,5,0,0,72,74,3,12,6,0,73,72,1,0,0,0,74,77,1,0,0,0,75,73,1,0,0,0,75,76,
-		1,0,0,0,76,78,1,0,0,0,77,75,1,0,0,0,78,134,5,11,0,0,79,83,5,6,0,0,80,82,
-		3,14,7,0,81,80,1,0,0,0,82,85,1,0,0,0,83,81,1,0,0,0,83,84,1,0,0,0,84,86,
-		1,0,0,0,85,83,1,0,0,0,86,134,5,11,0,0,87,91,5,7,0,0,88,90,3,14,7,0,89,
-		88,1,0,0,0,90,93,1,0,0,0,91,89,1,0,0,0,91,92,1,0,0,0,92,94,1,0,0,0,93,
-		91,1,0,0,0,94,134,5,11,0,0,95,99,5,8,0,0,96,98,3,24,12,0,97,96,1,0,0,0,
-		98,101,1,0,0,0,99,97,1,0,0,0,99,100,1,0,0,0,100,102,1,0,0,0,101,99,1,0,
-		0,0,102,134,5,11,0,0,103,107,5,9,0,0,104,106,3,32,16,0,105,104,1,0,0,0,
-		106,109,1,0,0,0,107,105,1,0,0,0,107,108,1,0,0,0,108,110,1,0,0,0,109,107,
-		1,0,0,0,110,134,5,11,0,0,111,115,5,10,0,0,112,114,3,36,18,0,113,112,1,
-		0,0,0,114,117,1,0,0,0,115,113,1,0,0,0,115,116,1,0,0,0,116,118,1,0,0,0,
-		117,115,1,0,0,0,118,134,5,11,0,0,119,120,5,12,0,0,120,121,5,46,0,0,121,
-		122,5,43,0,0,122,123,3,26,13,0,123,124,5,44,0,0,124,134,1,0,0,0,125,128,
-		5,13,0,0,126,127,5,46,0,0,127,129,5,43,0,0,128,126,1,0,0,0,128,129,1,0,
-		0,0,129,130,1,0,0,0,130,131,3,26,13,0,131,132,5,44,0,0,132,134,1,0,0,0,
-		133,63,1,0,0,0,133,71,1,0,0,0,133,79,1,0,0,0,133,87,1,0,0,0,133,95,1,0,
-		0,0,133,103,1,0,0,0,133,111,1,0,0,0,133,119,1,0,0,0,133,125,1,0,0,0,134,
-		5,1,0,0,0,135,136,5,47,0,0,136,7,1,0,0,0,137,138,5,46,0,0,138,139,5,43,
-		0,0,139,141,3,16,8,0,140,142,3,10,5,0,141,140,1,0,0,0,141,142,1,0,0,0,
-		142,144,1,0,0,0,143,145,3,6,3,0,144,143,1,0,0,0,144,145,1,0,0,0,145,146,
-		1,0,0,0,146,147,5,44,0,0,147,9,1,0,0,0,148,149,5,17,0,0,149,150,3,20,10,
-		0,150,151,5,29,0,0,151,152,3,20,10,0,152,11,1,0,0,0,153,154,5,46,0,0,154,
-		155,5,43,0,0,155,156,3,16,8,0,156,157,5,35,0,0,157,159,3,18,9,0,158,160,
-		3,6,3,0,159,158,1,0,0,0,159,160,1,0,0,0,160,161,1,0,0,0,161,162,5,44,0,
-		0,162,13,1,0,0,0,163,164,5,46,0,0,164,165,5,43,0,0,165,168,3,16,8,0,166,
-		167,5,18,0,0,167,169,3,18,9,0,168,166,1,0,0,0,168,169,1,0,0,0,169,171,
-		1,0,0,0,170,172,3,6,3,0,171,170,1,0,0,0,171,172,1,0,0,0,172,173,1,0,0,
-		0,173,174,5,44,0,0,174,15,1,0,0,0,175,176,7,0,0,0,176,17,1,0,0,0,177,182,
-		5,19,0,0,178,182,5,20,0,0,179,182,3,20,10,0,180,182,3,22,11,0,181,177,
-		1,0,0,0,181,178,1,0,0,0,181,179,1,0,0,0,181,180,1,0,0,0,182,19,1,0,0,0,
-		183,185,5,37,0,0,184,183,1,0,0,0,184,185,1,0,0,0,185,186,1,0,0,0,186,187,
-		5,45,0,0,187,21,1,0,0,0,188,192,5,26,0,0,189,190,5,45,0,0,190,192,5,46,
-		0,0,191,188,1,0,0,0,191,189,1,0,0,0,192,23,1,0,0,0,193,194,5,46,0,0,194,
-		195,5,27,0,0,195,196,3,26,13,0,196,197,5,44,0,0,197,25,1,0,0,0,198,199,
-		6,13,-1,0,199,200,7,1,0,0,200,203,3,26,13,10,201,203,3,28,14,0,202,198,
-		1,0,0,0,202,201,1,0,0,0,203,230,1,0,0,0,204,205,10,9,0,0,205,206,7,2,0,
-		0,206,229,3,26,13,10,207,208,10,8,0,0,208,209,7,3,0,0,209,229,3,26,13,
-		9,210,211,10,7,0,0,211,212,7,4,0,0,212,229,3,26,13,8,213,214,10,6,0,0,
-		214,215,5,22,0,0,215,229,3,26,13,7,216,217,10,5,0,0,217,218,5,24,0,0,218,
-		229,3,26,13,6,219,220,10,4,0,0,220,221,5,23,0,0,221,229,3,26,13,5,222,
-		223,10,3,0,0,223,224,5,25,0,0,224,229,3,26,13,4,225,226,10,2,0,0,226,227,
-		5,28,0,0,227,229,3,26,13,2,228,204,1,0,0,0,228,207,1,0,0,0,228,210,1,0,
-		0,0,228,213,1,0,0,0,228,216,1,0,0,0,228,219,1,0,0,0,228,222,1,0,0,0,228,
-		225,1,0,0,0,229,232,1,0,0,0,230,228,1,0,0,0,230,231,1,0,0,0,231,27,1,0,
-		0,0,232,230,1,0,0,0,233,234,5,40,0,0,234,235,3,26,13,0,235,236,5,41,0,
-		0,236,256,1,0,0,0,237,256,5,19,0,0,238,256,5,20,0,0,239,256,3,22,11,0,
-		240,256,5,45,0,0,241,242,5,46,0,0,242,251,5,40,0,0,243,248,3,30,15,0,244,
-		245,5,42,0,0,245,247,3,30,15,0,246,244,1,0,0,0,247,250,1,0,0,0,248,246,
-		1,0,0,0,248,249,1,0,0,0,249,252,1,0,0,0,250,248,1,0,0,0,251,243,1,0,0,
-		0,251,252,1,0,0,0,252,253,1,0,0,0,253,256,5,41,0,0,254,256,5,46,0,0,255,
-		233,1,0,0,0,255,237,1,0,0,0,255,238,1,0,0,0,255,239,1,0,0,0,255,240,1,
-		0,0,0,255,241,1,0,0,0,255,254,1,0,0,0,256,29,1,0,0,0,257,258,5,46,0,0,
-		258,260,5,27,0,0,259,257,1,0,0,0,259,260,1,0,0,0,260,261,1,0,0,0,261,262,
-		3,26,13,0,262,31,1,0,0,0,263,264,5,46,0,0,264,265,5,35,0,0,265,270,3,34,
-		17,0,266,267,5,42,0,0,267,269,3,34,17,0,268,266,1,0,0,0,269,272,1,0,0,
-		0,270,268,1,0,0,0,270,271,1,0,0,0,271,273,1,0,0,0,272,270,1,0,0,0,273,
-		274,5,44,0,0,274,33,1,0,0,0,275,280,5,46,0,0,276,280,3,22,11,0,277,280,
-		5,19,0,0,278,280,5,20,0,0,279,275,1,0,0,0,279,276,1,0,0,0,279,277,1,0,
-		0,0,279,278,1,0,0,0,280,35,1,0,0,0,281,282,5,46,0,0,282,283,5,35,0,0,283,
-		284,3,38,19,0,284,285,5,44,0,0,285,37,1,0,0,0,286,287,3,22,11,0,287,288,
-		5,29,0,0,288,289,3,22,11,0,289,295,1,0,0,0,290,295,3,22,11,0,291,295,5,
-		19,0,0,292,295,5,20,0,0,293,295,5,46,0,0,294,286,1,0,0,0,294,290,1,0,0,
-		0,294,291,1,0,0,0,294,292,1,0,0,0,294,293,1,0,0,0,295,39,1,0,0,0,29,44,
-		52,67,75,83,91,99,107,115,128,133,141,144,159,168,171,181,184,191,202,
-		228,230,248,251,255,259,270,279,294
+		7,1,7,1,7,1,7,1,7,1,7,3,7,170,8,7,3,7,172,8,7,1,7,3,7,175,8,7,1,7,1,7,
+		1,8,1,8,1,9,1,9,1,9,1,9,3,9,185,8,9,1,10,3,10,188,8,10,1,10,1,10,1,11,
+		1,11,1,11,3,11,195,8,11,1,12,1,12,1,12,1,12,1,12,1,13,1,13,1,13,1,13,3,
+		13,206,8,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,
+		1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,1,13,5,13,232,8,
+		13,10,13,12,13,235,9,13,1,14,1,14,1,14,1,14,1,14,1,14,1,14,1,14,1,14,1,
+		14,1,14,1,14,1,14,5,14,250,8,14,10,14,12,14,253,9,14,3,14,255,8,14,1,14,
+		1,14,3,14,259,8,14,1,15,1,15,3,15,263,8,15,1,15,1,15,1,16,1,16,1,16,1,
+		16,1,16,5,16,272,8,16,10,16,12,16,275,9,16,1,16,1,16,1,17,1,17,1,17,1,
+		17,3,17,283,8,17,1,18,1,18,1,18,1,18,1,18,1,19,1,19,1,19,1,19,1,19,1,19,
+		1,19,1,19,3,19,298,8,19,1,19,0,1,26,20,0,2,4,6,8,10,12,14,16,18,20,22,
+		24,26,28,30,32,34,36,38,0,5,1,0,14,16,2,0,21,21,37,37,1,0,38,39,1,0,36,
+		37,1,0,30,35,334,0,40,1,0,0,0,2,49,1,0,0,0,4,133,1,0,0,0,6,135,1,0,0,0,
+		8,137,1,0,0,0,10,148,1,0,0,0,12,153,1,0,0,0,14,163,1,0,0,0,16,178,1,0,
+		0,0,18,184,1,0,0,0,20,187,1,0,0,0,22,194,1,0,0,0,24,196,1,0,0,0,26,205,
+		1,0,0,0,28,258,1,0,0,0,30,262,1,0,0,0,32,266,1,0,0,0,34,282,1,0,0,0,36,
+		284,1,0,0,0,38,297,1,0,0,0,40,44,3,2,1,0,41,43,3,4,2,0,42,41,1,0,0,0,43,
+		46,1,0,0,0,44,42,1,0,0,0,44,45,1,0,0,0,45,47,1,0,0,0,46,44,1,0,0,0,47,
+		48,5,0,0,1,48,1,1,0,0,0,49,50,5,1,0,0,50,52,5,46,0,0,51,53,3,6,3,0,52,
+		51,1,0,0,0,52,53,1,0,0,0,53,54,1,0,0,0,54,55,5,44,0,0,55,56,5,2,0,0,56,
+		57,5,45,0,0,57,58,5,46,0,0,58,59,5,44,0,0,59,60,5,3,0,0,60,61,3,22,11,
+		0,61,62,5,44,0,0,62,3,1,0,0,0,63,67,5,4,0,0,64,66,3,8,4,0,65,64,1,0,0,
+		0,66,69,1,0,0,0,67,65,1,0,0,0,67,68,1,0,0,0,68,70,1,0,0,0,69,67,1,0,0,
+		0,70,134,5,11,0,0,71,75,5,5,0,0,72,74,3,12,6,0,73,72,1,0,0,0,74,77,1,0,
+		0,0,75,73,1,0,0,0,75,76,1,0,0,0,76,78,1,0,0,0,77,75,1,0,0,0,78,134,5,11,
+		0,0,79,83,5,6,0,0,80,82,3,14,7,0,81,80,1,0,0,0,82,85,1,0,0,0,83,81,1,0,
+		0,0,83,84,1,0,0,0,84,86,1,0,0,0,85,83,1,0,0,0,86,134,5,11,0,0,87,91,5,
+		7,0,0,88,90,3,14,7,0,89,88,1,0,0,0,90,93,1,0,0,0,91,89,1,0,0,0,91,92,1,
+		0,0,0,92,94,1,0,0,0,93,91,1,0,0,0,94,134,5,11,0,0,95,99,5,8,0,0,96,98,
+		3,24,12,0,97,96,1,0,0,0,98,101,1,0,0,0,99,97,1,0,0,0,99,100,1,0,0,0,100,
+		102,1,0,0,0,101,99,1,0,0,0,102,134,5,11,0,0,103,107,5,9,0,0,104,106,3,
+		32,16,0,105,104,1,0,0,0,106,109,1,0,0,0,107,105,1,0,0,0,107,108,1,0,0,
+		0,108,110,1,0,0,0,109,107,1,0,0,0,110,134,5,11,0,0,111,115,5,10,0,0,112,
+		114,3,36,18,0,113,112,1,0,0,0,114,117,1,0,0,0,115,113,1,0,0,0,115,116,
+		1,0,0,0,116,118,1,0,0,0,117,115,1,0,0,0,118,134,5,11,0,0,119,120,5,12,
+		0,0,120,121,5,46,0,0,121,122,5,43,0,0,122,123,3,26,13,0,123,124,5,44,0,
+		0,124,134,1,0,0,0,125,128,5,13,0,0,126,127,5,46,0,0,127,129,5,43,0,0,128,
+		126,1,0,0,0,128,129,1,0,0,0,129,130,1,0,0,0,130,131,3,26,13,0,131,132,
+		5,44,0,0,132,134,1,0,0,0,133,63,1,0,0,0,133,71,1,0,0,0,133,79,1,0,0,0,
+		133,87,1,0,0,0,133,95,1,0,0,0,133,103,1,0,0,0,133,111,1,0,0,0,133,119,
+		1,0,0,0,133,125,1,0,0,0,134,5,1,0,0,0,135,136,5,47,0,0,136,7,1,0,0,0,137,
+		138,5,46,0,0,138,139,5,43,0,0,139,141,3,16,8,0,140,142,3,10,5,0,141,140,
+		1,0,0,0,141,142,1,0,0,0,142,144,1,0,0,0,143,145,3,6,3,0,144,143,1,0,0,
+		0,144,145,1,0,0,0,145,146,1,0,0,0,146,147,5,44,0,0,147,9,1,0,0,0,148,149,
+		5,17,0,0,149,150,3,20,10,0,150,151,5,29,0,0,151,152,3,20,10,0,152,11,1,
+		0,0,0,153,154,5,46,0,0,154,155,5,43,0,0,155,156,3,16,8,0,156,157,5,35,
+		0,0,157,159,3,18,9,0,158,160,3,6,3,0,159,158,1,0,0,0,159,160,1,0,0,0,160,
+		161,1,0,0,0,161,162,5,44,0,0,162,13,1,0,0,0,163,164,5,46,0,0,164,165,5,
+		43,0,0,165,171,3,16,8,0,166,169,5,18,0,0,167,170,3,18,9,0,168,170,5,46,
+		0,0,169,167,1,0,0,0,169,168,1,0,0,0,170,172,1,0,0,0,171,166,1,0,0,0,171,
+		172,1,0,0,0,172,174,1,0,0,0,173,175,3,6,3,0,174,173,1,0,0,0,174,175,1,
+		0,0,0,175,176,1,0,0,0,176,177,5,44,0,0,177,15,1,0,0,0,178,179,7,0,0,0,
+		179,17,1,0,0,0,180,185,5,19,0,0,181,185,5,20,0,0,182,185,3,20,10,0,183,
+		185,3,22,11,0,184,180,1,0,0,0,184,181,1,0,0,0,184,182,1,0,0,0,184,183,
+		1,0,0,0,185,19,1,0,0,0,186,188,5,37,0,0,187,186,1,0,0,0,187,188,1,0,0,
+		0,188,189,1,0,0,0,189,190,5,45,0,0,190,21,1,0,0,0,191,195,5,26,0,0,192,
+		193,5,45,0,0,193,195,5,46,0,0,194,191,1,0,0,0,194,192,1,0,0,0,195,23,1,
+		0,0,0,196,197,5,46,0,0,197,198,5,27,0,0,198,199,3,26,13,0,199,200,5,44,
+		0,0,200,25,1,0,0,0,201,202,6,13,-1,0,202,203,7,1,0,0,203,206,3,26,13,10,
+		204,206,3,28,14,0,205,201,1,0,0,0,205,204,1,0,0,0,206,233,1,0,0,0,207,
+		208,10,9,0,0,208,209,7,2,0,0,209,232,3,26,13,10,210,211,10,8,0,0,211,212,
+		7,3,0,0,212,232,3,26,13,9,213,214,10,7,0,0,214,215,7,4,0,0,215,232,3,26,
+		13,8,216,217,10,6,0,0,217,218,5,22,0,0,218,232,3,26,13,7,219,220,10,5,
+		0,0,220,221,5,24,0,0,221,232,3,26,13,6,222,223,10,4,0,0,223,224,5,23,0,
+		0,224,232,3,26,13,5,225,226,10,3,0,0,226,227,5,25,0,0,227,232,3,26,13,
+		4,228,229,10,2,0,0,229,230,5,28,0,0,230,232,3,26,13,2,231,207,1,0,0,0,
+		231,210,1,0,0,0,231,213,1,0,0,0,231,216,1,0,0,0,231,219,1,0,0,0,231,222,
+		1,0,0,0,231,225,1,0,0,0,231,228,1,0,0,0,232,235,1,0,0,0,233,231,1,0,0,
+		0,233,234,1,0,0,0,234,27,1,0,0,0,235,233,1,0,0,0,236,237,5,40,0,0,237,
+		238,3,26,13,0,238,239,5,41,0,0,239,259,1,0,0,0,240,259,5,19,0,0,241,259,
+		5,20,0,0,242,259,3,22,11,0,243,259,5,45,0,0,244,245,5,46,0,0,245,254,5,
+		40,0,0,246,251,3,30,15,0,247,248,5,42,0,0,248,250,3,30,15,0,249,247,1,
+		0,0,0,250,253,1,0,0,0,251,249,1,0,0,0,251,252,1,0,0,0,252,255,1,0,0,0,
+		253,251,1,0,0,0,254,246,1,0,0,0,254,255,1,0,0,0,255,256,1,0,0,0,256,259,
+		5,41,0,0,257,259,5,46,0,0,258,236,1,0,0,0,258,240,1,0,0,0,258,241,1,0,
+		0,0,258,242,1,0,0,0,258,243,1,0,0,0,258,244,1,0,0,0,258,257,1,0,0,0,259,
+		29,1,0,0,0,260,261,5,46,0,0,261,263,5,27,0,0,262,260,1,0,0,0,262,263,1,
+		0,0,0,263,264,1,0,0,0,264,265,3,26,13,0,265,31,1,0,0,0,266,267,5,46,0,
+		0,267,268,5,35,0,0,268,273,3,34,17,0,269,270,5,42,0,0,270,272,3,34,17,
+		0,271,269,1,0,0,0,272,275,1,0,0,0,273,271,1,0,0,0,273,274,1,0,0,0,274,
+		276,1,0,0,0,275,273,1,0,0,0,276,277,5,44,0,0,277,33,1,0,0,0,278,283,5,
+		46,0,0,279,283,3,22,11,0,280,283,5,19,0,0,281,283,5,20,0,0,282,278,1,0,
+		0,0,282,279,1,0,0,0,282,280,1,0,0,0,282,281,1,0,0,0,283,35,1,0,0,0,284,
+		285,5,46,0,0,285,286,5,35,0,0,286,287,3,38,19,0,287,288,5,44,0,0,288,37,
+		1,0,0,0,289,290,3,22,11,0,290,291,5,29,0,0,291,292,3,22,11,0,292,298,1,
+		0,0,0,293,298,3,22,11,0,294,298,5,19,0,0,295,298,5,20,0,0,296,298,5,46,
+		0,0,297,289,1,0,0,0,297,293,1,0,0,0,297,294,1,0,0,0,297,295,1,0,0,0,297,
+		296,1,0,0,0,298,39,1,0,0,0,30,44,52,67,75,83,91,99,107,115,128,133,141,
+		144,159,169,171,174,184,187,194,205,231,233,251,254,258,262,273,282,297
 	};
 
 	public static readonly ATN _ATN =

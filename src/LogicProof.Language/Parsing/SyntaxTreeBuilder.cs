@@ -14,6 +14,9 @@ namespace LogicProof.Language.Parsing;
 /// </summary>
 internal sealed class SyntaxTreeBuilder
 {
+    /// <summary>The word after <c>init</c> for a non-volatile memory.</summary>
+    public const string RetainedWord = "retained";
+
     private readonly SourceText _source;
     private readonly DiagnosticBag _diagnostics;
     private readonly LiteralReader _literals;
@@ -144,15 +147,28 @@ internal sealed class SyntaxTreeBuilder
     private SettingDeclarationSyntax Setting(LogicProofParser.SettingDeclContext setting) =>
         new(_source.TextOf(setting.name), _source.SpanOf(setting.name), Type(setting.typeName()), _literals.Literal(setting.value), _literals.Description(setting.description()), _source.SpanOf(setting));
 
-    private VariableDeclarationSyntax Variable(LogicProofParser.VariableDeclContext variable, VariableKind kind) =>
-        new(
+    private VariableDeclarationSyntax Variable(LogicProofParser.VariableDeclContext variable, VariableKind kind)
+    {
+        if (variable.retained is { } word && !string.Equals(_source.TextOf(word), RetainedWord, StringComparison.OrdinalIgnoreCase))
+        {
+            _diagnostics.Error(
+                LanguageCodes.UnknownInitWord,
+                $"init takes TRUE, FALSE, a number or the word {RetainedWord}, not '{_source.TextOf(word)}'",
+                _source.SpanOf(word));
+        }
+
+        return new(
             _source.TextOf(variable.name),
             _source.SpanOf(variable.name),
             kind,
             Type(variable.typeName()),
             variable.initial is null ? null : _literals.Literal(variable.initial),
             _literals.Description(variable.description()),
-            _source.SpanOf(variable));
+            _source.SpanOf(variable))
+        {
+            Retained = variable.retained is not null,
+        };
+    }
 
     private EquationSyntax Equation(LogicProofParser.EquationContext equation) =>
         new(_source.TextOf(equation.target), _source.SpanOf(equation.target), _expressions.Build(equation.expr()), _source.SpanOf(equation));

@@ -108,6 +108,10 @@ public static class SchemePrinter
             output.Append(" init ");
             ExpressionPrinter.Write(output, initial);
         }
+        else if (variable.Retained)
+        {
+            output.Append(" init retained");
+        }
 
         output.Append(Description(variable.Description));
     }

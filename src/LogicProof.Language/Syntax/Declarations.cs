@@ -18,7 +18,11 @@ public enum VariableKind
     Output,
 }
 
-/// <summary>A local or output variable. <see cref="Initial"/> is its power-up value when declared.</summary>
+/// <summary>
+/// A local or output variable. <see cref="Initial"/> is its power-up value when declared. <see cref="Retained"/> is
+/// TRUE for <c>init retained</c>: a non-volatile memory whose power-up value is the value it had before the relay
+/// restarted (IEC 61131-3 RETAIN); <see cref="Initial"/> is then null.
+/// </summary>
 public sealed record VariableDeclarationSyntax(
     string Name,
     SourceSpan NameSpan,
@@ -26,4 +30,7 @@ public sealed record VariableDeclarationSyntax(
     ValueType Type,
     ExpressionSyntax? Initial,
     string? Description,
-    SourceSpan Span);
+    SourceSpan Span)
+{
+    public bool Retained { get; init; }
+}

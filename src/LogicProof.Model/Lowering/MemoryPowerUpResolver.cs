@@ -7,7 +7,7 @@ namespace LogicProof.Model.Lowering;
 /// <summary>
 /// Decides the power-up of each declared variable's PreviousValue slot, in this order:
 /// <list type="number">
-/// <item>a declared <c>init</c> value;</item>
+/// <item>a declared <c>init</c> value (<c>init retained</c>: unknown);</item>
 /// <item>a variable no equation writes keeps its power-up value for ever: FALSE or 0;</item>
 /// <item>a variable written by an SR/RS that is its whole equation, without <c>init</c>: unknown, like the latch
 /// memory it mirrors (the two unknowns are independent, which only adds behaviours);</item>

@@ -21,7 +21,7 @@ namespace LogicProof.Model.Lowering;
 /// and the cell of each requirement, extra property and assumption.
 /// </para>
 /// <para>
-/// Memories: see <see cref="MemoryPowerUpResolver"/> for variables; timers start at 0 (TOF at its preset, that is
+/// Memories: see <see cref="MemoryPowerUpResolver"/> for variables (a declared <c>init retained</c> is unknown); timers start at 0 (TOF at its preset, that is
 /// expired), edge memories FALSE, an SR/RS memory at its variable's <c>init</c> when it is the whole equation, else
 /// unknown.
 /// </para>
@@ -169,6 +169,12 @@ public static class ModelBuilder
             var symbol = SymbolOf(scheme, declaration.Name);
             PowerUp? powerUp = symbol.PowerUp switch
             {
+                // init retained (IEC 61131-3 RETAIN): the value before the restart. The precise set of such values is
+                // every value the memory reaches in any run, itself started from a retained value: a fixed point the
+                // checker does not compute. Unknown (both values, every other memory fresh) contains that set, so a
+                // proof from it holds after any restart; it may only add runs, giving a counterexample that starts
+                // from a value the scheme could never have reached, which the report shows as a power-up choice.
+                null when symbol.Retained => new UnknownPowerUp(),
                 null => null,
                 BoundBoolConstant b when symbol.Type == Language.Syntax.ValueType.Bool => new KnownBoolPowerUp(b.Value),
                 BoundRealConstant r when symbol.Type == Language.Syntax.ValueType.Real => new KnownRealPowerUp(r.Value),

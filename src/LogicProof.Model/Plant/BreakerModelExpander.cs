@@ -116,7 +116,21 @@ public static class BreakerModelExpander
             protection = command?.Name;
         }
 
-        return ok ? new BreakerConnections(close!, trip!, closed, open, protection) : null;
+        string? spring = null;
+        if (settings is { SpringRechargeTime: { } recharge })
+        {
+            spring = Status(roles, RoleNames.SpringCharged, diagnostics, ref ok);
+            if (roles.Find(RoleNames.SpringCharged) is null)
+            {
+                diagnostics.Error(
+                    RuleCodes.BreakerModelNeedsRole,
+                    "spring_recharge_time models the closing spring: bind spring_charged to the spring-charged input, which the model then drives",
+                    recharge.Span);
+                ok = false;
+            }
+        }
+
+        return ok ? new BreakerConnections(close!, trip!, closed, open, protection) { SpringStatus = spring } : null;
     }
 
     private static string? Status(RoleBindings roles, string role, DiagnosticBag diagnostics, ref bool ok)
@@ -170,6 +184,7 @@ public static class BreakerModelExpander
             (BreakerModelSettingsReader.ClosingTimeKey, settings.ClosingTime),
             (BreakerModelSettingsReader.OpeningTimeKey, settings.OpeningTime),
             (BreakerModelSettingsReader.CloseIntoFaultDelayKey, settings.CloseIntoFaultDelay),
+            (BreakerModelSettingsReader.SpringRechargeTimeKey, settings.SpringRechargeTime),
         };
         foreach (var (key, range) in ranges)
         {

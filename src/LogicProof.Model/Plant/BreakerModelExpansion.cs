@@ -17,8 +17,39 @@ public sealed record BreakerModelExpansion(BoundScheme? Scheme, bool StatusModel
         StatusModelled && Settings is { } s
             ? $"breaker status {string.Join(", ", ModelledStatuses)} driven by the breaker model (closing {Describe(s.ClosingTime)}, "
               + $"opening {Describe(s.OpeningTime)}, trip-free {(s.TripFree ? "yes" : "no")}, close into fault "
-              + (s.CloseIntoFaultDelay is { } d ? $"within {Describe(d)}" : "no") + ")"
+              + (s.CloseIntoFaultDelay is { } d ? $"within {Describe(d)}" : "no") + Options(s) + ")"
             : "breaker status inputs are free (no breaker_model block): the checker lets 52a/52b take any value at any scan";
+
+    private static string Options(BreakerModelSettings s)
+    {
+        var options = new List<string>();
+        if (s.FailsToClose)
+        {
+            options.Add("may fail to close");
+        }
+
+        if (s.FailsToTrip)
+        {
+            options.Add("may fail to trip");
+        }
+
+        if (s.SpringRechargeTime is { } spring)
+        {
+            options.Add($"spring recharge {Describe(spring)}");
+        }
+
+        if (s.TravelContactsFree)
+        {
+            options.Add("52a/52b free during travel");
+        }
+
+        if (s.AuxContactFault)
+        {
+            options.Add("52a/52b may fail stuck");
+        }
+
+        return options.Count == 0 ? string.Empty : ", " + string.Join(", ", options);
+    }
 
     private static string Describe(BreakerTimeRange range) =>
         range.LowText == range.HighText ? range.LowText : $"{range.LowText} .. {range.HighText}";

@@ -12,7 +12,9 @@ namespace LogicProof.Model.Plant;
 /// Reads and checks the keys of a <c>breaker_model</c> block: <c>closing_time</c> and <c>opening_time</c> (required,
 /// a range <c>D .. D</c>, one duration, or a time setting), <c>trip_free</c> and <c>close_into_fault</c> (TRUE or
 /// FALSE, FALSE when left out) and <c>close_into_fault_delay</c> (needed when close_into_fault is TRUE). Keys are
-/// compared ignoring case. Returns null after reporting an error.
+/// compared ignoring case. The failure options <c>fails_to_close</c>, <c>fails_to_trip</c>, <c>travel_contacts_free</c>
+/// and <c>aux_contact_fault</c> (TRUE or FALSE) and <c>spring_recharge_time</c> (a range) are off when left out.
+/// Returns null after reporting an error.
 /// </summary>
 public static class BreakerModelSettingsReader
 {
@@ -21,8 +23,17 @@ public static class BreakerModelSettingsReader
     public const string TripFreeKey = "trip_free";
     public const string CloseIntoFaultKey = "close_into_fault";
     public const string CloseIntoFaultDelayKey = "close_into_fault_delay";
+    public const string FailsToCloseKey = "fails_to_close";
+    public const string FailsToTripKey = "fails_to_trip";
+    public const string SpringRechargeTimeKey = "spring_recharge_time";
+    public const string TravelContactsFreeKey = "travel_contacts_free";
+    public const string AuxContactFaultKey = "aux_contact_fault";
 
-    private static readonly string[] Keys = [ClosingTimeKey, OpeningTimeKey, TripFreeKey, CloseIntoFaultKey, CloseIntoFaultDelayKey];
+    private static readonly string[] Keys =
+    [
+        ClosingTimeKey, OpeningTimeKey, TripFreeKey, CloseIntoFaultKey, CloseIntoFaultDelayKey,
+        FailsToCloseKey, FailsToTripKey, SpringRechargeTimeKey, TravelContactsFreeKey, AuxContactFaultKey,
+    ];
 
     public static BreakerModelSettings? Read(BoundScheme scheme, DiagnosticBag diagnostics)
     {
@@ -67,12 +78,24 @@ public static class BreakerModelSettingsReader
             diagnostics.Warning(RuleCodes.CloseIntoFaultDelayIgnored, "close_into_fault_delay is ignored: close_into_fault is not TRUE", ignored.KeySpan);
         }
 
+        var spring = byKey.ContainsKey(SpringRechargeTimeKey) ? Range(scheme, byKey, SpringRechargeTimeKey, block.Span, diagnostics) : null;
+        var failsToClose = Flag(byKey, FailsToCloseKey, diagnostics);
+        var failsToTrip = Flag(byKey, FailsToTripKey, diagnostics);
+        var travelContactsFree = Flag(byKey, TravelContactsFreeKey, diagnostics);
+        var auxContactFault = Flag(byKey, AuxContactFaultKey, diagnostics);
         if (diagnostics.Count(d => d.IsError) > errorsBefore || closing is null || opening is null)
         {
             return null;
         }
 
-        return new BreakerModelSettings(closing, opening, tripFree, closeIntoFault, delay, block.Span);
+        return new BreakerModelSettings(closing, opening, tripFree, closeIntoFault, delay, block.Span)
+        {
+            FailsToClose = failsToClose,
+            FailsToTrip = failsToTrip,
+            SpringRechargeTime = spring,
+            TravelContactsFree = travelContactsFree,
+            AuxContactFault = auxContactFault,
+        };
     }
 
     private static BreakerTimeRange? Range(

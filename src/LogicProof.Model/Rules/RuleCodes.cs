@@ -2,7 +2,8 @@ namespace LogicProof.Model.Rules;
 
 /// <summary>
 /// Diagnostic codes of the roles, the built-in rules and the breaker model (the LP6xxx range): LP600x roles,
-/// LP602x rule selection and expansion, LP603x and LP604x the breaker model. Codes are stable: tests and CI filters
+/// LP602x rule selection and expansion, LP603x and LP604x the breaker model, LP605x warnings on settings and power-up
+/// found before any proof. Codes are stable: tests and CI filters
 /// key on them, and a code is never reused for a different meaning. Messages may be reworded.
 /// </summary>
 public static class RuleCodes
@@ -78,4 +79,10 @@ public static class RuleCodes
 
     /// <summary>Warning: close_into_fault_delay is given while close_into_fault is not TRUE; it is ignored.</summary>
     public const string CloseIntoFaultDelayIgnored = "LP6043";
+
+    /// <summary>Warning: close_fail_time is not longer than the breaker model's longest closing time, so a healthy slow close would be called a failure.</summary>
+    public const string CloseFailNotAboveClosingTime = "LP6050";
+
+    /// <summary>Warning: a lockout (86) declared init TRUE: it comes up operated and trips an in-service breaker at every relay restart.</summary>
+    public const string LockoutOperatedAtPowerUp = "LP6051";
 }

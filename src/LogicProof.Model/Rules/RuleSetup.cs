@@ -34,6 +34,8 @@ public static class RuleSetup
         var diagnostics = new DiagnosticBag();
         var roles = RoleBinder.Bind(scheme, diagnostics);
         var breaker = BreakerModelExpander.Expand(scheme, roles, diagnostics);
+        SetupWarnings.CheckCloseFailTime(scheme, roles, breaker.Settings, diagnostics);
+        SetupWarnings.CheckLockoutPowerUp(scheme, roles, diagnostics);
         var rules = breaker.Scheme is { } modelScheme
             ? RuleExpander.Expand(modelScheme, roles, selection, diagnostics)
             : CheckSelectionOnly(selection, diagnostics);

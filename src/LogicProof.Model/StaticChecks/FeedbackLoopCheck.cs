@@ -50,12 +50,12 @@ internal static class FeedbackLoopCheck
     {
         var memories = lastScanEdges.Select(e => e.Source).Distinct().OrderBy(v => v.Order).ToList();
         var undeclared = memories
-            .Where(v => !scheme.Symbols.TryGetValue(v.Name, out var symbol) || symbol.PowerUp is null)
+            .Where(v => !scheme.Symbols.TryGetValue(v.Name, out var symbol) || symbol is { PowerUp: null, Retained: false })
             .ToHashSet();
         var powerUp = undeclared.Count == 0
             ? $"power-up declared (init) for {List(memories)}"
             : $"no power-up value declared for {List(memories.Where(undeclared.Contains))}: unknown at power-up, " +
-              "so every rule must hold from either value (declare it with init)";
+              "so every rule must hold from either value (declare it with init, or init retained for a non-volatile memory)";
         var diagnostic = new Diagnostic(
             ModelCodes.FeedbackLoop,
             undeclared.Count == 0 ? Severity.Info : Severity.Warning,

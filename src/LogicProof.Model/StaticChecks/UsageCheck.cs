@@ -74,7 +74,7 @@ internal static class UsageCheck
             if (!written.Contains(symbol.Name))
             {
                 var what = symbol.Kind == SymbolKind.Output ? "output" : "local";
-                var value = symbol.PowerUp is null ? "FALSE or 0" : "its init value";
+                var value = symbol.Retained ? "its retained value" : symbol.PowerUp is null ? "FALSE or 0" : "its init value";
                 diagnostics.Warning(
                     ModelCodes.UndrivenVariable,
                     $"{what} '{symbol.Name}' is not written by any equation: it keeps its power-up value ({value}) for ever",

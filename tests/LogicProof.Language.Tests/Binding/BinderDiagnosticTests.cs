@@ -73,6 +73,7 @@ public class BinderDiagnosticTests
     [InlineData(LanguageCodes.SettingValueType, Scheme.Header + "settings\n  S : bool = @T#5ms;\nend\n")]
     [InlineData(LanguageCodes.InitValueType, Scheme.Header + "locals\n  L : bool init @1.5;\nend\n")]
     [InlineData(LanguageCodes.InitValueType, Scheme.Header + "outputs\n  L : real init @FALSE;\nend\n")]
+    [InlineData(LanguageCodes.RetainedNeedsBool, Scheme.Header + "locals\n  @L : real init retained;\nend\n")]
     [InlineData(LanguageCodes.RangeNotAllowed, Scheme.Header + "inputs\n  A : bool @range 0 .. 1;\nend\n")]
     [InlineData(LanguageCodes.RangeEmpty, Scheme.Header + "inputs\n  R : real @range 2 .. -1;\nend\n")]
     [InlineData(LanguageCodes.TimeTypeNotAllowed, Scheme.Header + "inputs\n  @T1 : time;\nend\n")]

@@ -26,6 +26,7 @@ public class SyntaxDiagnosticTests
     [InlineData(LanguageCodes.DuplicateBreakerModel, H + "breaker_model\n  a = TRUE;\nend\n@breaker_model\n  b = FALSE;\nend\n")]
     [InlineData(LanguageCodes.TimingNotPositive, "scheme T;\nfrequency @0 Hz;\nscan 2 ms;\n")]
     [InlineData(LanguageCodes.TimingNotPositive, "scheme T;\nfrequency 60 Hz;\nscan @0.0 cyc;\n")]
+    [InlineData(LanguageCodes.UnknownInitWord, H + "locals\n  L : bool init @retain;\nend\n")]
     public void Load_WhenTextIsMalformed_ReportsTheCodeAtThePlace(string code, string markedText)
     {
         DiagnosticAssert.ErrorAtMarker(code, markedText);

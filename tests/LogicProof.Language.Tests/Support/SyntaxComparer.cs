@@ -95,7 +95,7 @@ internal static class SyntaxComparer
 
     private static string? Variable(VariableDeclarationSyntax a, VariableDeclarationSyntax b) =>
         Same("name", a.Name, b.Name) ?? Same("type", a.Type, b.Type) ?? Same("description", a.Description, b.Description)
-        ?? Same("has init", a.Initial is null, b.Initial is null)
+        ?? Same("has init", a.Initial is null, b.Initial is null) ?? Same("retained", a.Retained, b.Retained)
         ?? (a.Initial is null ? null : FirstDifference(a.Initial, b.Initial!));
 
     private static string? Role(RoleBindingSyntax a, RoleBindingSyntax b) =>

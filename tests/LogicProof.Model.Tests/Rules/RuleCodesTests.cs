@@ -18,6 +18,8 @@ public sealed class RuleCodesTests
         RuleCodes.BreakerProgramInvalid, // internal: the generated breaker does not parse or bind
         RuleCodes.BreakerTimeRounded, // BreakerModelExpanderTests
         RuleCodes.CloseIntoFaultDelayIgnored, // BreakerModelExpanderTests
+        RuleCodes.CloseFailNotAboveClosingTime, // SetupWarningsTests
+        RuleCodes.LockoutOperatedAtPowerUp, // SetupWarningsTests
     ];
 
     [Fact]
