@@ -119,7 +119,9 @@ public static class SimulateCommand
             Report(error, new Diagnostic(
                 TraceCodes.PowerUpDefaulted,
                 Severity.Warning,
-                $"latch '{name}' has no declared power-up value; simulated from FALSE (choose with --powerup {name}=TRUE or {name}=FALSE).",
+                model.Cells[slot.Cell].IsRetained
+                    ? $"latch '{name}' is retained: its value before the restart is not in the trace; simulated from FALSE (choose with --powerup {name}=TRUE or {name}=FALSE)."
+                    : $"latch '{name}' has no declared power-up value; simulated from FALSE (choose with --powerup {name}=TRUE or {name}=FALSE).",
                 model.Cells[slot.Cell].Span), front.Source);
         }
 

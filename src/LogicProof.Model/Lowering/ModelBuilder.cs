@@ -122,6 +122,7 @@ public static class ModelBuilder
             {
                 Description = symbol.Description,
                 IsOutput = symbol.Kind == SymbolKind.Output,
+                IsRetained = symbol.Retained,
             });
             cellOfSymbol.Add(symbol.Name, cell);
             variables.Add(cell);

@@ -13,6 +13,9 @@ public sealed record Cell(int Index, string Name, CellKind Kind, SignalType Type
 
     public bool IsOutput { get; init; }
 
+    /// <summary>Declared variables only: <c>init retained</c>, a non-volatile memory whose power-up value is unknown.</summary>
+    public bool IsRetained { get; init; }
+
     /// <summary>Real inputs only: the declared range, both ends included.</summary>
     public (Fraction Low, Fraction High)? Range { get; init; }
 }

@@ -91,6 +91,19 @@ public sealed class SimulateCommandTests : IDisposable
     }
 
     [Fact]
+    public void Simulate_WhenARetainedLatchHasNoPowerUpGiven_SaysItIsRetainedAndStartsFalse()
+    {
+        var scheme = Scheme.Replace("LOCKOUT_86 : bool;", "LOCKOUT_86 : bool init retained;", StringComparison.Ordinal);
+        Assert.NotEqual(Scheme, scheme);
+
+        var (exitCode, output, error) = Simulate(scheme, Trace);
+
+        Assert.Equal(0, exitCode);
+        Assert.Contains("warning LP4019: latch 'LOCKOUT_86' is retained", error, StringComparison.Ordinal);
+        Assert.EndsWith("|  0           1*", Lines(output)[3], StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Simulate_WhenLatchPoweredUpTrue_CloseIsBlocked()
     {
         var (exitCode, output, _) = Simulate(Scheme, Trace, "--powerup", "lockout_86=TRUE", "--format", "csv");
