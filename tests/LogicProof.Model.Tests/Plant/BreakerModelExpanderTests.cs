@@ -88,6 +88,9 @@ public sealed class BreakerModelExpanderTests
     [InlineData("trip_free = T#6ms;", "T#6ms", RuleCodes.BreakerModelValueKind)]
     [InlineData("opening_time = T#4ms;", "opening_time", RuleCodes.BreakerModelKeyTwice)]
     [InlineData("close_into_fault = TRUE;", "close_into_fault = TRUE;", RuleCodes.BreakerModelKeyMissing)]
+    [InlineData("fails_to_close = T#6ms;", "T#6ms", RuleCodes.BreakerModelValueKind)]
+    [InlineData("aux_contact_fault = CO;", "CO", RuleCodes.BreakerModelValueKind)]
+    [InlineData("spring_recharge_time = T#9ms .. T#3ms;", "T#9ms .. T#3ms", RuleCodes.BreakerModelRangeInvalid)]
     public void Expand_WhenAKeyIsWrong_ReportsItsCodeWhereItIsWritten(string line, string offending, string code)
     {
         var (text, offendingLine) = WithBlock("closing_time = T#6ms;\n  opening_time = T#4ms;", line);
@@ -147,6 +150,55 @@ public sealed class BreakerModelExpanderTests
         Assert.Equal(code, error.Code);
         Assert.Contains(named, error.Message, StringComparison.Ordinal);
         Assert.Null(expansion.Scheme);
+    }
+
+    [Theory]
+    [InlineData("", RuleCodes.BreakerModelNeedsRole, "bind spring_charged")]
+    [InlineData("spring_charged = SEEN_CLOSED;", RuleCodes.BreakerStatusNotInput, "SEEN_CLOSED")]
+    public void Expand_WhenTheSpringIsModelledWithoutASpringInput_ReportsIt(string springRole, string code, string named)
+    {
+        var text = RuleHarness.Header + Body + Roles.Replace(" end", " " + springRole + " end", StringComparison.Ordinal)
+            + "breaker_model\n  closing_time = T#6ms;\n  opening_time = T#4ms;\n  spring_recharge_time = T#20ms .. T#40ms;\nend\n";
+
+        var expansion = Expand(RuleHarness.Bind(text), out var diagnostics);
+
+        var error = Assert.Single(diagnostics);
+        Assert.Equal(code, error.Code);
+        Assert.Contains(named, error.Message, StringComparison.Ordinal);
+        Assert.Null(expansion.Scheme);
+    }
+
+    [Fact]
+    public void Expand_WhenEveryFailureOptionIsOn_DrivesTheSpringInputAndNamesTheOptions()
+    {
+        var text = RuleHarness.Header + Body.Replace("B52B : bool;", "B52B : bool; SPRING_LS : bool;", StringComparison.Ordinal)
+            + Roles.Replace(" end", " spring_charged = SPRING_LS; end", StringComparison.Ordinal)
+            + "breaker_model\n  closing_time = T#6ms;\n  opening_time = T#4ms;\n  fails_to_close = TRUE;\n  fails_to_trip = TRUE;\n"
+            + "  spring_recharge_time = T#20ms .. T#40ms;\n  travel_contacts_free = TRUE;\n  aux_contact_fault = TRUE;\nend\n";
+
+        var expansion = Expand(RuleHarness.Bind(text), out var diagnostics);
+
+        Assert.Empty(diagnostics);
+        Assert.Equal(["B52A", "B52B", "SPRING_LS"], expansion.ModelledStatuses);
+        Assert.Equal(SymbolKind.Local, expansion.Scheme!.Symbols["SPRING_LS"].Kind);
+        Assert.Equal(SymbolKind.Input, expansion.Scheme.Symbols["BKM_CLOSE_FAILS"].Kind);
+        Assert.Equal(SymbolKind.Input, expansion.Scheme.Symbols["BKM_B_STUCK_VALUE"].Kind);
+        Assert.Equal(LineOf(text, "spring_recharge_time"), expansion.Scheme.Assumptions.Single(a => a.Name == "BKM_RECHARGE_TIME_MAX").Syntax.Span.Line);
+        Assert.Contains("may fail to close, may fail to trip, spring recharge T#20ms .. T#40ms, 52a/52b free during travel, 52a/52b may fail stuck", expansion.Summary, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Expand_WhenNoFailureOptionIsWritten_WritesTheHealthyBreakerOnly()
+    {
+        var text = RuleHarness.Header + Body + Roles + "breaker_model closing_time = T#6ms; opening_time = T#4ms; trip_free = TRUE; end\n";
+
+        var program = Expand(RuleHarness.Bind(text), out _).Program!.ToText();
+
+        Assert.Contains("BKM_CLOSING := (NOT BKM_WAS_CLOSED AND NOT BKM_CLOSING AND NOT BKM_OPENING AND BKM_CLOSE_COIL AND NOT BKM_TRIP_COIL) OR (BKM_CLOSING AND NOT BKM_CLOSING_DONE AND NOT BKM_ABORT);", program, StringComparison.Ordinal);
+        Assert.Contains("B52B := NOT BKM_CLOSED AND NOT BKM_CLOSING AND NOT BKM_OPENING;", program, StringComparison.Ordinal);
+        Assert.DoesNotContain("FAILS", program, StringComparison.Ordinal);
+        Assert.DoesNotContain("SPRING", program, StringComparison.Ordinal);
+        Assert.DoesNotContain("IN_TRAVEL", program, StringComparison.Ordinal);
     }
 
     [Fact]
