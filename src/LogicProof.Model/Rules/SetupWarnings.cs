@@ -52,7 +52,8 @@ internal static class SetupWarnings
     /// </summary>
     public static void CheckLockoutPowerUp(BoundScheme scheme, RoleBindings roles, DiagnosticBag diagnostics)
     {
-        if (roles.Find(RoleNames.Lockout) is not { } lockout)
+        // Without a trip output the lockout trips nothing the checker knows of (it still blocks closes, which is safe).
+        if (roles.Find(RoleNames.Lockout) is not { } lockout || !roles.IsBound(RoleNames.TripOutput))
         {
             return;
         }

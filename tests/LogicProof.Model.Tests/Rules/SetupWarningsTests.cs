@@ -48,10 +48,7 @@ public sealed class SetupWarningsTests
     [Fact]
     public void Prepare_WhenThereIsNoBreakerModel_DoesNotCompareTheCloseFailTime()
     {
-        var text = Scheme("T#2ms", "init FALSE");
-        text = text[..text.IndexOf("breaker_model", StringComparison.Ordinal)] + text[text.IndexOf("roles", StringComparison.Ordinal)..];
-
-        var setup = RuleHarness.Setup(text);
+        var setup = RuleHarness.Setup(WithoutBreaker(Scheme("T#2ms", "init FALSE")));
 
         Assert.DoesNotContain(setup.Diagnostics, d => d.Code == RuleCodes.CloseFailNotAboveClosingTime);
     }
@@ -79,6 +76,18 @@ public sealed class SetupWarningsTests
     }
 
     [Fact]
+    public void Prepare_WhenNoTripOutputIsBound_DoesNotWarnAboutTheLockoutPowerUp()
+    {
+        // The breaker model needs trip_output, so this scheme has none.
+        var text = WithoutBreaker(Scheme("T#20ms", "init TRUE")).Replace(" trip_output = TO;", string.Empty, StringComparison.Ordinal);
+
+        var setup = RuleHarness.Setup(text);
+
+        Assert.NotNull(setup.ModelScheme);
+        Assert.DoesNotContain(setup.Diagnostics, d => d.Code == RuleCodes.LockoutOperatedAtPowerUp);
+    }
+
+    [Fact]
     public void Build_WhenTheLockoutIsRetained_LeavesItsPowerUpToTheChecker()
     {
         // IEC 61131-3 RETAIN: the value before the restart, which may be either; the checker takes both.
@@ -88,6 +97,9 @@ public sealed class SetupWarningsTests
         Assert.Contains(model.StateSlots, s => s.Cell == lockoutCell);
         Assert.All(model.StateSlots.Where(s => s.Cell == lockoutCell), s => Assert.IsType<UnknownPowerUp>(s.PowerUp));
     }
+
+    private static string WithoutBreaker(string text) =>
+        text[..text.IndexOf("breaker_model", StringComparison.Ordinal)] + text[text.IndexOf("roles", StringComparison.Ordinal)..];
 
     private static int LineOf(string text, string fragment) =>
         text[..text.IndexOf(fragment, StringComparison.Ordinal)].Count(c => c == '\n') + 1;
