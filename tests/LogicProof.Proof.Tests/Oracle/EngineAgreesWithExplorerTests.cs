@@ -15,7 +15,7 @@ public sealed class EngineAgreesWithExplorerTests(ITestOutputHelper output)
     private static readonly int Iterations = AtLeast(2000, "LOGICPROOF_ORACLE_SCHEMES");
 
     /// <summary>Bays carry about ten rules each: fewer per run; LOGICPROOF_ORACLE_BAYS raises it.</summary>
-    private static readonly int BayIterations = AtLeast(100, "LOGICPROOF_ORACLE_BAYS");
+    private static readonly int BayIterations = AtLeast(60, "LOGICPROOF_ORACLE_BAYS");
 
     private const int Threads = 2;
 
