@@ -9,8 +9,8 @@ namespace LogicProof.Proof.Tests.Oracle;
 /// exhausted list reads as zeros, and zero picks the fuller, more careful option, so shrinking gives the plain bay).
 /// Roles bind the built-in close-supervision rules; every term of the close logic may be left out, so some rules
 /// hold and some fail. Optional: a lockout latch (SR or RS, with or without power-up), a synchronism permissive from
-/// a real voltage restricted by an assumption to {0, 0.5, 1}, and a breaker_model with travel times of one or two
-/// scans. Invented: Quillmere test bay.
+/// a real voltage restricted by an assumption to {0, 0.5, 1}, a low-gas input with either low-gas policy, and a
+/// breaker_model with travel times of one or two scans (sometimes closing onto a fault). Invented: Quillmere test bay.
 /// </summary>
 internal sealed class BayRecipe
 {
@@ -19,10 +19,10 @@ internal sealed class BayRecipe
     private readonly byte[] _choices;
     private int _next;
 
-    public BayRecipe(bool lockout, bool sync, bool breaker, byte[] choices)
+    public BayRecipe(bool lockout, bool sync, bool gas, bool breaker, byte[] choices)
     {
         _choices = choices;
-        Source = Write(lockout, sync, breaker);
+        Source = Write(lockout, sync, gas, breaker);
         RealDomains = sync ? new Dictionary<string, Fraction[]> { ["LINE_V"] = VoltageDomain } : new Dictionary<string, Fraction[]>();
     }
 
@@ -32,7 +32,7 @@ internal sealed class BayRecipe
 
     public override string ToString() => Source;
 
-    private string Write(bool lockout, bool sync, bool breaker)
+    private string Write(bool lockout, bool sync, bool gas, bool breaker)
     {
         var text = new StringBuilder();
         text.AppendLine("// Generated oracle bay: Quillmere test bay (invented)");
@@ -43,6 +43,7 @@ internal sealed class BayRecipe
         text.AppendLine("  CMD : bool; TRIP_CMD : bool; B52A : bool; B52B : bool;");
         text.AppendLine(lockout ? "  RESET : bool;" : string.Empty);
         text.AppendLine(sync ? "  LINE_V : real;" : string.Empty);
+        text.AppendLine(gas ? "  LOW_GAS : bool;" : string.Empty);
         text.AppendLine("end");
         text.AppendLine("locals");
         text.AppendLine(CultureInfo.InvariantCulture, $"  START : bool; SEAL : bool{Init()}; FAIL : bool; ANTI_PUMP : bool{Init()};");
@@ -64,9 +65,12 @@ internal sealed class BayRecipe
             equations.Add(Pick(2) == 0 ? "SYNC := TON(LINE_V >= 0.5, T#1ms);" : "SYNC := ABS(LINE_V - 1) <= 0.5;");
         }
 
-        equations.Add($"TRIP_OUT := TRIP_CMD{Term(lockout ? " OR LOCKOUT" : string.Empty)}{Term(string.Empty, " AND B52A")};");
+        var tripOnLowGas = Pick(2) == 0;
+        var trip = $"TRIP_CMD{Term(lockout ? " OR LOCKOUT" : string.Empty)}{(gas && tripOnLowGas ? Term(" OR LOW_GAS") : string.Empty)}{Term(string.Empty, " AND B52A")}";
+        equations.Add($"TRIP_OUT := {(gas && !tripOnLowGas ? $"({trip}){Term(" AND NOT LOW_GAS")}" : trip)};");
         var start = "START := CMD" + Term(" AND B52B") + Term(" AND NOT B52A") + Term(" AND NOT TRIP_OUT") + Term(" AND NOT ANTI_PUMP")
-            + (lockout ? Term(" AND NOT LOCKOUT") : string.Empty) + (sync ? Term(" AND SYNC") : string.Empty) + ";";
+            + (lockout ? Term(" AND NOT LOCKOUT") : string.Empty) + (sync ? Term(" AND SYNC") : string.Empty)
+            + (gas ? Term(" AND NOT LOW_GAS") : string.Empty) + ";";
         equations.Add(start);
         equations.Add("SEAL := (START OR SEAL)" + Term(" AND NOT B52A") + Term(" AND NOT TRIP_OUT") + Term(" AND NOT FAIL") + ";");
         equations.Add($"FAIL := TON(SEAL, T#{1 + Pick(3)}ms);");
@@ -84,7 +88,8 @@ internal sealed class BayRecipe
 
         if (breaker)
         {
-            text.AppendLine(CultureInfo.InvariantCulture, $"breaker_model closing_time = T#1ms .. T#{1 + Pick(2)}ms; opening_time = T#1ms .. T#{1 + Pick(2)}ms; trip_free = {(Pick(2) == 0 ? "TRUE" : "FALSE")}; end");
+            var fault = Pick(3) == 2 ? $" close_into_fault = TRUE; close_into_fault_delay = T#1ms .. T#{1 + Pick(2)}ms;" : string.Empty;
+            text.AppendLine(CultureInfo.InvariantCulture, $"breaker_model closing_time = T#1ms .. T#{1 + Pick(2)}ms; opening_time = T#1ms .. T#{1 + Pick(2)}ms; trip_free = {(Pick(2) == 0 ? "TRUE" : "FALSE")};{fault} end");
         }
 
         if (sync)
@@ -103,6 +108,7 @@ internal sealed class BayRecipe
         text.AppendLine(CultureInfo.InvariantCulture, $"  close_fail_time = T#{1 + Pick(3)}ms;");
         text.AppendLine(lockout ? "  lockout = LOCKOUT; lockout_reset_local = RESET;" : string.Empty);
         text.AppendLine(sync ? "  sync_permissive = SYNC;" : string.Empty);
+        text.AppendLine(gas ? $"  low_gas = LOW_GAS; low_gas_policy = {(tripOnLowGas ? "trip" : "block_trip")};" : string.Empty);
         text.AppendLine("end");
         return text.ToString();
     }

@@ -25,10 +25,10 @@ public sealed class EngineAgreesWithExplorerTests(ITestOutputHelper output)
             .Select((inputs, locals, second, assume, choices, reals) =>
                 new SchemeRecipe(inputs, locals, second == 0 ? 2 : 1, assume == 0, choices, reals switch { 2 => 1, 3 => 2, _ => 0 }));
 
-    /// <summary>A lockout one time in two, a synchronism permissive one time in three, the breaker model one time in two.</summary>
+    /// <summary>A lockout one time in two, a synchronism permissive and low gas each one time in three, the breaker model one time in two.</summary>
     private static readonly Gen<BayRecipe> Bays =
-        Gen.Select(Gen.Bool, Gen.Int[0, 2], Gen.Bool, Gen.Byte.Array[0, 40])
-            .Select((lockout, sync, breaker, choices) => new BayRecipe(lockout, sync == 0, breaker, choices));
+        Gen.Select(Gen.Bool, Gen.Int[0, 2], Gen.Int[0, 2], Gen.Bool, Gen.Byte.Array[0, 40])
+            .Select((lockout, sync, gas, breaker, choices) => new BayRecipe(lockout, sync == 0, gas == 0, breaker, choices));
 
     [Fact]
     public void Verdicts_WhenSchemesAreRandom_AgreeWithTheReferenceInterpreter()
