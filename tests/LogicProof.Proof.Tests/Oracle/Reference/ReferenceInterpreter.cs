@@ -43,6 +43,10 @@ internal sealed class ReferenceInterpreter
 
     public IEnumerable<ReferenceState> PowerUpStates() => _layout.PowerUpStates();
 
+    /// <summary>A bool variable's value from the scan before, as kept in <paramref name="state"/>; null when it is not kept.</summary>
+    public bool? LastScanValue(ReferenceState state, string variable) =>
+        _layout.LastValue.TryGetValue(variable, out var last) && !last.IsReal ? state.Flags[last.Slot] : null;
+
     /// <summary>
     /// One scan from <paramref name="before"/> (left unchanged). Fills <paramref name="properties"/> with each
     /// property's value at this scan and returns whether every assumption holds at it.

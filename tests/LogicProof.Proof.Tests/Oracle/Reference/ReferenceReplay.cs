@@ -8,12 +8,16 @@ namespace LogicProof.Proof.Tests.Oracle.Reference;
 /// Replays a product counterexample in the reference interpreter: each row's inputs (by name) held for its scans, an
 /// input the trace does not list keeping its last value (FALSE or 0 at first: such an input is outside the property's
 /// cone and cannot matter). Every assumption must hold at every scan, the property before the failing scan, and the
-/// property must be FALSE at the failing scan. The trace's power-up values name the product's own memories, which the
-/// reference does not share, so the trace replays when it does so from some power-up state of the reference.
-/// Returns null when it replays, else what went wrong.
+/// property must be FALSE at the failing scan. The trace's power-up values name the product's own memories; those that
+/// give a variable's value before the first scan (<c>NAME@last</c>, shown to the user as the latch NAME) must match
+/// the reference's start state, and the trace replays when it does so from some such power-up state of the
+/// reference (a block's own memory, such as an SR's Q1, is not pinned). Returns null when it replays, else what went
+/// wrong.
 /// </summary>
 internal static class ReferenceReplay
 {
+    private const string LastScanSuffix = "@last";
+
     public static string? Check(ReferenceInterpreter interpreter, string propertyName, Counterexample trace)
     {
         var property = interpreter.Properties.ToList().FindIndex(p => string.Equals(p.Name, propertyName, StringComparison.OrdinalIgnoreCase));
@@ -55,8 +59,12 @@ internal static class ReferenceReplay
             return Text($"the trace has {scans.Count} scans but fails at scan {trace.FailingScan}");
         }
 
+        var pinned = trace.PowerUp
+            .Where(v => v.Name.EndsWith(LastScanSuffix, StringComparison.Ordinal) && v.Value is BoolTraceValue)
+            .Select(v => (Variable: v.Name[..^LastScanSuffix.Length], ((BoolTraceValue)v.Value).Value))
+            .ToList();
         string? problem = null;
-        foreach (var start in interpreter.PowerUpStates())
+        foreach (var start in interpreter.PowerUpStates().Where(s => pinned.All(p => interpreter.LastScanValue(s, p.Variable) is not { } v || v == p.Value)))
         {
             var outcome = Run(interpreter, property, scans, start);
             if (outcome is null)
@@ -67,7 +75,7 @@ internal static class ReferenceReplay
             problem ??= outcome;
         }
 
-        return problem;
+        return problem ?? "no power-up state of the reference has the trace's power-up values";
     }
 
     private static string? Run(ReferenceInterpreter interpreter, int property, List<ReferenceInputs> scans, ReferenceState state)
