@@ -92,7 +92,7 @@ public sealed class InvariantGeneratorTests(ITestOutputHelper output)
         foreach (var source in new[] { InvariantSchemes.Lockout(declareInit), InvariantSchemes.AssumedNoReset(declareInit) })
         {
             var model = SchemeLoader.Load(source);
-            var reachable = new ExplicitStateExplorer(model).Explore(100_000);
+            var reachable = BreadthFirstExplorer.Explore(new SimulatorStepper(model), 100_000);
             Assert.True(reachable.Complete);
 
             var lemmas = new InvariantGenerator().Generate(model);

@@ -15,6 +15,9 @@ internal sealed class OracleTally
     private long _pdrViolated;
     private long _pdrInconclusive;
     private long _lemmas;
+    private long _realSchemes;
+    private long _breakerSchemes;
+    private long _ruleProperties;
 
     public long Schemes => Interlocked.Read(ref _schemes);
 
@@ -26,7 +29,12 @@ internal sealed class OracleTally
 
     public long PdrInconclusive => Interlocked.Read(ref _pdrInconclusive);
 
-    public void Scheme() => Interlocked.Increment(ref _schemes);
+    public void Scheme(bool hasRealInputs, bool hasBreakerModel)
+    {
+        Interlocked.Increment(ref _schemes);
+        Interlocked.Add(ref _realSchemes, hasRealInputs ? 1 : 0);
+        Interlocked.Add(ref _breakerSchemes, hasBreakerModel ? 1 : 0);
+    }
 
     public void IncompleteExploration() => Interlocked.Increment(ref _incompleteExplorations);
 
@@ -36,11 +44,15 @@ internal sealed class OracleTally
 
     public void Pdr(string outcome) => Interlocked.Increment(ref Counter(outcome, ref _pdrProved, ref _pdrViolated, ref _pdrInconclusive));
 
-    public void Property() => Interlocked.Increment(ref _properties);
+    public void Property(bool isRule)
+    {
+        Interlocked.Increment(ref _properties);
+        Interlocked.Add(ref _ruleProperties, isRule ? 1 : 0);
+    }
 
     public override string ToString() => string.Create(
         CultureInfo.InvariantCulture,
-        $"{Schemes} schemes ({IncompleteExplorations} too large to explore), {Properties} properties; portfolio: {_proved} proved, {_violated} violated, {_inconclusive} inconclusive; pdr alone: {_pdrProved} proved, {_pdrViolated} violated, {_pdrInconclusive} inconclusive; {_lemmas} lemmas generated, all true in every reachable state");
+        $"{Schemes} schemes ({_realSchemes} with real inputs, {_breakerSchemes} with the breaker model, {IncompleteExplorations} too large to explore), {Properties} properties ({_ruleProperties} built-in rules); portfolio: {_proved} proved, {_violated} violated, {_inconclusive} inconclusive; pdr alone: {_pdrProved} proved, {_pdrViolated} violated, {_pdrInconclusive} inconclusive; {_lemmas} lemmas generated, all true in every reachable state");
 
     private static ref long Counter(string outcome, ref long proved, ref long violated, ref long inconclusive)
     {

@@ -1,9 +1,13 @@
+using LogicProof.Proof.Tests.Oracle.Reference;
 using LogicProof.Proof.Tests.Support;
 
 namespace LogicProof.Proof.Tests.Oracle;
 
-/// <summary>The oracle itself must be right, or the agreement test proves nothing: small cases worked by hand.</summary>
-public sealed class ExplicitStateExplorerTests
+/// <summary>
+/// The oracle itself must be right, or the agreement test proves nothing: small cases worked by hand, explored with
+/// the reference interpreter (the verdicts) and with the product's simulator (the lemma checks' states).
+/// </summary>
+public sealed class BreadthFirstExplorerTests
 {
     [Theory]
     [InlineData(1, 2)]
@@ -11,20 +15,20 @@ public sealed class ExplicitStateExplorerTests
     public void Explore_WhenAnOnDelayClosesAfterItsPreset_ReportsPresetPlusOneScans(int presetScans, long expectedScans)
     {
         // TON: Q rises at the (n+1)-th consecutive scan with IN TRUE (IEC 61131-3 ed.3 §6.6.3.5.4, TON timing).
-        var model = SchemeLoader.Load(Delay($"T#{presetScans}ms", assume: string.Empty));
+        var source = Delay($"T#{presetScans}ms", assume: string.Empty);
 
-        var exploration = new ExplicitStateExplorer(model).Explore(1_000);
+        var reference = Reference(source, 1_000);
+        var simulator = BreadthFirstExplorer.Explore(new SimulatorStepper(SchemeLoader.Load(source)), 1_000);
 
-        Assert.True(exploration.Complete);
-        Assert.Equal(expectedScans, exploration.ShortestViolation[0]);
+        Assert.True(reference.Complete);
+        Assert.Equal(expectedScans, reference.ShortestViolation[0]);
+        Assert.Equal(expectedScans, simulator.ShortestViolation[0]);
     }
 
     [Fact]
     public void Explore_WhenAnAssumptionForbidsTheCommand_FindsNoViolation()
     {
-        var model = SchemeLoader.Load(Delay("T#2ms", assume: "assume NO_COMMAND: NOT CMD;"));
-
-        var exploration = new ExplicitStateExplorer(model).Explore(1_000);
+        var exploration = Reference(Delay("T#2ms", assume: "assume NO_COMMAND: NOT CMD;"), 1_000);
 
         Assert.Null(exploration.ShortestViolation[0]);
         Assert.Single(exploration.ReachableStates);
@@ -35,7 +39,7 @@ public sealed class ExplicitStateExplorerTests
     {
         // The only violating scans have CMD TRUE, which the assumption forbids in that very scan: a scan with a FALSE
         // assumption is a dead end, and its property value does not count.
-        var model = SchemeLoader.Load("""
+        var exploration = Reference("""
             // Quillmere test bay, direct close (invented)
             scheme ORACLE_DIRECT;
             frequency 50 Hz;
@@ -51,9 +55,7 @@ public sealed class ExplicitStateExplorerTests
             end
             require NEVER_CLOSES: NOT CLOSE;
             assume NO_COMMAND: NOT CMD;
-            """);
-
-        var exploration = new ExplicitStateExplorer(model).Explore(1_000);
+            """, 1_000);
 
         Assert.Null(exploration.ShortestViolation[0]);
     }
@@ -63,7 +65,7 @@ public sealed class ExplicitStateExplorerTests
     [InlineData(" init FALSE", null)]
     public void Explore_WhenASealInHasNoDeclaredPowerUp_TriesBothValues(string init, long? expected)
     {
-        var model = SchemeLoader.Load($$"""
+        var exploration = Reference($$"""
             // Quillmere test bay, seal-in (invented)
             scheme ORACLE_SEAL;
             frequency 50 Hz;
@@ -78,9 +80,7 @@ public sealed class ExplicitStateExplorerTests
               SEAL := CMD OR SEAL;
             end
             require NEEDS_COMMAND: SEAL -> ONCE(CMD);
-            """);
-
-        var exploration = new ExplicitStateExplorer(model).Explore(1_000);
+            """, 1_000);
 
         Assert.Equal(expected, exploration.ShortestViolation[0]);
     }
@@ -88,12 +88,13 @@ public sealed class ExplicitStateExplorerTests
     [Fact]
     public void Explore_WhenTheStateLimitIsReached_SaysTheSearchIsIncomplete()
     {
-        var model = SchemeLoader.Load(Delay("T#4ms", assume: string.Empty));
-
-        var exploration = new ExplicitStateExplorer(model).Explore(2);
+        var exploration = Reference(Delay("T#4ms", assume: string.Empty), 2);
 
         Assert.False(exploration.Complete);
     }
+
+    private static Exploration<ReferenceState> Reference(string source, int maxStates) =>
+        BreadthFirstExplorer.Explore(new ReferenceStepper(new ReferenceInterpreter(ReferenceProgram.FromSource(source))), maxStates);
 
     private static string Delay(string preset, string assume) => $$"""
         // Quillmere test bay, close delay (invented)
